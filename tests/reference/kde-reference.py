@@ -5,7 +5,7 @@ Run with Debian's interpreter (python3-scipy, python3-sklearn):
     /usr/bin/python3 tests/reference/kde-reference.py
 or  npm run reference -w @demandscape/core
 
-Writes tests/reference/expected/*.json. The input points live in tests/reference/data/*.csv;
+Writes tests/reference/expected/*.json. The input points live in tests/reference/input/*.csv;
 they are generated (seeded, invented) only when missing, and always read back from the CSV so
 both sides use the identical decimal input.
 
@@ -31,7 +31,7 @@ from scipy import integrate, stats
 from sklearn.neighbors import KernelDensity
 
 HERE = os.path.dirname(os.path.abspath(__file__))
-DATA = os.path.join(HERE, "data")
+INPUT = os.path.join(HERE, "input")
 EXPECTED = os.path.join(HERE, "expected")
 
 # Reference grid: 50 m cells over [0, 20 km] x [0, 15 km]; cell (i, j) centre at
@@ -210,10 +210,10 @@ def bandwidth_reference(x, y, w):
 
 
 def main():
-    os.makedirs(DATA, exist_ok=True)
+    os.makedirs(INPUT, exist_ok=True)
     os.makedirs(EXPECTED, exist_ok=True)
-    planar = os.path.join(DATA, "points-planar.csv")
-    spread = os.path.join(DATA, "points-bandwidth.csv")
+    planar = os.path.join(INPUT, "points-planar.csv")
+    spread = os.path.join(INPUT, "points-bandwidth.csv")
     if not os.path.exists(planar):
         points_planar_write(planar)
     if not os.path.exists(spread):
@@ -222,7 +222,7 @@ def main():
     versions = {"python": sys.version.split()[0], "numpy": np.__version__, "scipy": scipy.__version__, "sklearn": sklearn.__version__}
     kde = {
         "versions": versions,
-        "input": "tests/reference/data/points-planar.csv",
+        "input": "tests/reference/input/points-planar.csv",
         "units": "intensity in weight per km^2; coordinates and bandwidths in metres",
         "grid": GRID,
         "totalWeight": float(w.sum()),
@@ -234,7 +234,7 @@ def main():
         "sklearnSinglePoint": {name: sklearn_single_point_mass(name) for name in SKLEARN_NAME},
     }
     bx, by, bw = points_read(spread)
-    bandwidth = {"versions": versions, "input": "tests/reference/data/points-bandwidth.csv", **bandwidth_reference(bx, by, bw)}
+    bandwidth = {"versions": versions, "input": "tests/reference/input/points-bandwidth.csv", **bandwidth_reference(bx, by, bw)}
     for name, payload in (("kde-planar", kde), ("kernel-constants", kernels), ("bandwidth-normal-reference", bandwidth)):
         with open(os.path.join(EXPECTED, f"{name}.json"), "w") as f:
             json.dump(payload, f, indent=1)
