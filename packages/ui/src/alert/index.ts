@@ -1,0 +1,1 @@
+export { Alert, type AlertProps } from './alert';

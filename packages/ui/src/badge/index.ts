@@ -1,0 +1,1 @@
+export { Badge, type BadgeProps } from './badge';

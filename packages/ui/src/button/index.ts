@@ -1,0 +1,1 @@
+export { Button, buttonVariants, type ButtonProps } from './button';

@@ -1,0 +1,1 @@
+export { Card, CardHeader, type CardHeaderProps } from './card';

@@ -1,0 +1,1 @@
+export { Dialog, type DialogProps } from './dialog';

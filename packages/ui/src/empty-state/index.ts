@@ -1,0 +1,1 @@
+export { EmptyState, type EmptyStateProps } from './empty-state';

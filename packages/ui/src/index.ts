@@ -1,0 +1,13 @@
+export { cn } from './lib/cn';
+export * from './button';
+export * from './spinner';
+export * from './input';
+export * from './field';
+export * from './textarea';
+export * from './select';
+export * from './card';
+export * from './dialog';
+export * from './alert';
+export * from './badge';
+export * from './empty-state';
+export * from './logo-mark';

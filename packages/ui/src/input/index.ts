@@ -1,0 +1,1 @@
+export { Input, controlClass, type InputProps } from './input';

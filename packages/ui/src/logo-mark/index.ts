@@ -1,0 +1,1 @@
+export { LogoMark, type LogoMarkProps } from './logo-mark';

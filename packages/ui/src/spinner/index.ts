@@ -1,0 +1,1 @@
+export { Spinner, type SpinnerProps } from './spinner';

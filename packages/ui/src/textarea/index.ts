@@ -1,0 +1,1 @@
+export { TextAreaField, type TextAreaFieldProps } from './textarea';
