@@ -1,0 +1,193 @@
+import { throwIfAborted } from '../errors.js';
+import { kernelByName, type Kernel } from '../kernels/kernels.js';
+import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
+import { kdeContributingPoints } from './kde-contributing.js';
+import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
+import { kernelStencil, REACH_SQ_SHRINK, stencilSubOffsets } from './kde-stencil.js';
+
+export interface KdeExactOptions extends KdeGridOptions {
+  /** Per-point bandwidths in metres (adaptive estimate); `bandwidth` is then only a fallback. */
+  bandwidths?: Float64Array;
+  /** Also count, per cell, the distinct points with a non-zero kernel value there. */
+  countContributors?: boolean;
+  /** Force the kernel sub-sampling per cell (1 = cell centres); by default as {@link kernelStencil} picks. */
+  oversample?: number;
+}
+
+/** Cell visits between progress reports and abort checks. */
+const VISITS_PER_CHUNK = 4_000_000;
+
+/**
+ * Weighted kernel intensity by direct summation: λ̂(c) = Σᵢ wᵢ K_hᵢ(c − xᵢ) at every cell
+ * centre c, in weight per m². Each point visits only the cells within its kernel's reach (the
+ * bounding box of the disc of radius reach·h, rows outside the disc skipped), so the cost is
+ * n × (cells in reach) — the bucketing is by point, not by cell, which needs no index at all.
+ *
+ * The kernel is evaluated exactly as the binned method's stencil samples it (see
+ * {@link kernelStencil}): at cell centres, or as cell means on an s × s sub-lattice when the
+ * kernel is too narrow or too jumpy for centre samples to carry its mass.
+ *
+ * @param points planar points in metres with weights ≥ 0 (validated by the caller)
+ * @param spec the grid
+ * @param kernelName the kernel
+ * @param bandwidth h in metres (support radius, or sd for the Gaussian)
+ * @param options mask, per-point bandwidths, contributor counts, abort signal, progress
+ * @returns λ̂ per m², optional contributor counts, the number of contributing points
+ * @example
+ * const { values } = kdeExact(points, spec, 'quartic', 800);
+ */
+export function kdeExact(
+  points: PlanarPoints,
+  spec: GridSpec,
+  kernelName: KernelName,
+  bandwidth: number,
+  options: KdeExactOptions = {},
+): KdeGridResult {
+  const kernel = kernelByName(kernelName);
+  const { bandwidths, mask, signal, onProgress } = options;
+  const { cellSize, width, height } = spec;
+  const n = points.x.length;
+  let hMin = bandwidth;
+  if (bandwidths) {
+    hMin = Infinity;
+    for (let i = 0; i < n; i++) if (bandwidths[i] < hMin) hMin = bandwidths[i];
+  }
+  const s = options.oversample ?? kernelStencil(kernel, hMin, cellSize).oversample;
+  const values = new Float64Array(width * height);
+  const contributors = options.countContributors ? new Uint32Array(width * height) : undefined;
+
+  const visitsPerPoint = (h: number): number => {
+    const side = (2 * kernel.reach * h) / cellSize + 2;
+    return side * side * s * s;
+  };
+  let i = 0;
+  while (i < n) {
+    throwIfAborted(signal);
+    const budget = Math.max(1, Math.floor(VISITS_PER_CHUNK / visitsPerPoint(bandwidth)));
+    const end = Math.min(n, i + budget);
+    if (s === 1) {
+      sumCentres(points, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors);
+    } else {
+      sumCellMeans(points, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors, s);
+    }
+    i = end;
+    onProgress?.(i / n);
+  }
+  if (mask) for (let c = 0; c < values.length; c++) if (!mask[c]) values[c] = 0;
+  return {
+    values,
+    contributors,
+    contributingPoints: kdeContributingPoints(points, spec, kernel, bandwidths ?? bandwidth, s),
+    oversample: s,
+  };
+}
+
+function sumCentres(
+  points: PlanarPoints,
+  from: number,
+  to: number,
+  spec: GridSpec,
+  kernel: Kernel,
+  bandwidth: number,
+  bandwidths: Float64Array | undefined,
+  mask: Uint8Array | undefined,
+  values: Float64Array,
+  contributors: Uint32Array | undefined,
+): void {
+  const { x, y, w } = points;
+  const { originX, originY, cellSize, width, height } = spec;
+  const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
+  for (let k = from; k < to; k++) {
+    const wk = w[k];
+    if (wk === 0) continue;
+    const h = bandwidths ? bandwidths[k] : bandwidth;
+    const invH = 1 / h;
+    const scale = wk * invH * invH;
+    const reachM = kernel.reach * h;
+    // Continuous cell index of the point: cell centre i sits at fx = i.
+    const fx = (x[k] - originX) / cellSize - 0.5;
+    const fy = (y[k] - originY) / cellSize - 0.5;
+    const rc = reachM / cellSize;
+    const i0 = Math.max(0, Math.ceil(fx - rc));
+    const i1 = Math.min(width - 1, Math.floor(fx + rc));
+    const j0 = Math.max(0, Math.ceil(fy - rc));
+    const j1 = Math.min(height - 1, Math.floor(fy + rc));
+    if (i0 > i1 || j0 > j1) continue;
+    const stepR = cellSize * invH;
+    for (let j = j0; j <= j1; j++) {
+      const dy = (j - fy) * stepR;
+      const dy2 = dy * dy;
+      if (dy2 >= reach2) continue;
+      const row = j * width;
+      for (let i = i0; i <= i1; i++) {
+        const dx = (i - fx) * stepR;
+        const r2 = dx * dx + dy2;
+        if (r2 >= reach2) continue;
+        const c = row + i;
+        if (mask !== undefined && mask[c] === 0) continue;
+        const v = kernel.valueSq(r2);
+        if (v > 0) {
+          values[c] += scale * v;
+          if (contributors !== undefined) contributors[c]++;
+        }
+      }
+    }
+  }
+}
+
+function sumCellMeans(
+  points: PlanarPoints,
+  from: number,
+  to: number,
+  spec: GridSpec,
+  kernel: Kernel,
+  bandwidth: number,
+  bandwidths: Float64Array | undefined,
+  mask: Uint8Array | undefined,
+  values: Float64Array,
+  contributors: Uint32Array | undefined,
+  s: number,
+): void {
+  const { x, y, w } = points;
+  const { originX, originY, cellSize, width, height } = spec;
+  const sub = stencilSubOffsets(s);
+  const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
+  for (let k = from; k < to; k++) {
+    const wk = w[k];
+    if (wk === 0) continue;
+    const h = bandwidths ? bandwidths[k] : bandwidth;
+    const invH = 1 / h;
+    const scale = (wk * invH * invH) / (s * s);
+    const fx = (x[k] - originX) / cellSize - 0.5;
+    const fy = (y[k] - originY) / cellSize - 0.5;
+    // A cell's sub-samples reach half a cell beyond its centre.
+    const rc = (kernel.reach * h) / cellSize + 0.5;
+    const i0 = Math.max(0, Math.ceil(fx - rc));
+    const i1 = Math.min(width - 1, Math.floor(fx + rc));
+    const j0 = Math.max(0, Math.ceil(fy - rc));
+    const j1 = Math.min(height - 1, Math.floor(fy + rc));
+    const stepR = cellSize * invH;
+    for (let j = j0; j <= j1; j++) {
+      const row = j * width;
+      for (let i = i0; i <= i1; i++) {
+        const c = row + i;
+        if (mask !== undefined && mask[c] === 0) continue;
+        let acc = 0;
+        for (let q = 0; q < s; q++) {
+          const dy = (j + sub[q] - fy) * stepR;
+          const dy2 = dy * dy;
+          if (dy2 >= reach2) continue;
+          for (let p = 0; p < s; p++) {
+            const dx = (i + sub[p] - fx) * stepR;
+            const r2 = dx * dx + dy2;
+            if (r2 < reach2) acc += kernel.valueSq(r2);
+          }
+        }
+        if (acc > 0) {
+          values[c] += scale * acc;
+          if (contributors !== undefined) contributors[c]++;
+        }
+      }
+    }
+  }
+}
