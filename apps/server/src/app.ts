@@ -1,0 +1,156 @@
+import { createRequire } from 'node:module';
+import cookieParser from 'cookie-parser';
+import { doubleCsrf } from 'csrf-csrf';
+import express, { type Express, type RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import session from 'express-session';
+import helmet from 'helmet';
+import { RequestContext } from '@mikro-orm/core';
+import type { MikroORM } from '@mikro-orm/sqlite';
+import { pinoHttp } from 'pino-http';
+import type { AppConfig } from './config.js';
+import { ormInit } from './db.js';
+import { loggerCreate } from './logger.js';
+import { authRoutes } from './modules/auth/auth.routes.js';
+import { passportCreate } from './modules/auth/passport-setup.js';
+import { AppError } from './modules/common/errors.js';
+import { apiNotFound, errorHandler } from './modules/common/error-handler.js';
+import { healthRoutes } from './modules/health/health.routes.js';
+import { mailerCreate, type OutgoingMail } from './modules/mail/mailer.js';
+import { organizationRoutes } from './modules/organization/organization.routes.js';
+import { SqliteSessionStore } from './modules/session/session-store.js';
+import { meRoutes } from './modules/user/user.routes.js';
+import { webStaticMount } from './web-static.js';
+
+const { version } = createRequire(import.meta.url)('../package.json') as { version: string };
+
+/** The running app and its handles. */
+export interface DemandscapeApp {
+  app: Express;
+  orm: MikroORM;
+  /** Messages sent while MAIL_TRANSPORT=capture (tests read tokens from here). */
+  mailbox: OutgoingMail[];
+  sessionStore: SqliteSessionStore;
+  /** Whether the built web app is served. */
+  servesWeb: boolean;
+  close: () => Promise<void>;
+}
+
+/**
+ * Builds the Express app: opens SQLite and runs migrations, then wires security headers, sessions,
+ * CSRF, rate limits, passport, the API routes, the built web app and the single error handler.
+ * @param config - validated configuration (see `configFromEnv`)
+ * @returns the app, ORM, captured mailbox and a `close` that releases everything
+ * @example
+ * const { app, close } = await createApp(configFromEnv(process.env));
+ */
+export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
+  const log = loggerCreate(config.logLevel);
+  const orm = await ormInit(config.databaseFile, (message) => log.info({ component: 'orm' }, message));
+  const em = orm.em;
+  const mailer = mailerCreate(config.mail);
+  const sessionStore = new SqliteSessionStore(orm, config.sessionTtlMs);
+  const passport = passportCreate(em, config);
+  const pruneTimer = setInterval(() => void sessionStore.prune().catch((err) => log.warn({ err }, 'session prune failed')), 3600_000);
+  pruneTimer.unref();
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    pinoHttp({
+      logger: log,
+      // Paths only: query strings can carry OAuth codes.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, path: req.url.split('?')[0] }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+      customProps: (req) => ({ userId: (req as express.Request).user?.id }),
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          workerSrc: ["'self'", 'blob:'],
+          childSrc: ["'self'", 'blob:'],
+          connectSrc: ["'self'"],
+          fontSrc: ["'self'", 'data:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: config.secureCookies ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use((_req, _res, next) => RequestContext.create(em, next));
+  app.use(express.json({ limit: '1mb' }));
+  app.use(cookieParser());
+  app.use(
+    session({
+      name: 'ds.sid',
+      secret: config.sessionSecret,
+      store: sessionStore,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: config.sessionTtlMs, path: '/' },
+    }),
+  );
+  app.use(passport.session());
+
+  const csrf = doubleCsrf({
+    getSecret: () => config.sessionSecret,
+    getSessionIdentifier: (req) => req.sessionID,
+    cookieName: config.secureCookies ? '__Host-ds.csrf' : 'ds.csrf',
+    cookieOptions: { sameSite: 'lax', secure: config.secureCookies, httpOnly: true, path: '/' },
+    getCsrfTokenFromRequest: (req) => req.headers['x-csrf-token'],
+  });
+  app.use('/api', csrf.doubleCsrfProtection);
+
+  const limiter = (): RequestHandler =>
+    rateLimit({
+      windowMs: 60_000,
+      limit: config.rateLimitAuthPerMinute,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      handler: (_req, _res, next) => next(new AppError(429, 'RATE_LIMITED', 'Too many attempts from this address. Wait a minute and try again.')),
+    });
+
+  app.use('/api/health', healthRoutes(orm, version));
+  app.use(
+    '/api/auth',
+    authRoutes({
+      em,
+      mailer,
+      publicUrl: config.publicUrl,
+      googleEnabled: config.google.enabled,
+      passport,
+      sessionStore,
+      limiter,
+      csrfToken: (req, res) => csrf.generateCsrfToken(req, res),
+    }),
+  );
+  app.use('/api/me', meRoutes(em, sessionStore));
+  app.use('/api/organizations', organizationRoutes(em));
+  app.use('/api', apiNotFound());
+  const servesWeb = webStaticMount(app, config.webDist);
+  app.use(errorHandler(log));
+
+  return {
+    app,
+    orm,
+    mailbox: mailer.captured,
+    sessionStore,
+    servesWeb,
+    close: async () => {
+      clearInterval(pruneTimer);
+      mailer.close();
+      await orm.close(true);
+    },
+  };
+}

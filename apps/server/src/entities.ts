@@ -1,0 +1,10 @@
+import { AuditEventSchema } from './modules/audit/audit-event.entity.js';
+import { AuthTokenSchema } from './modules/auth/auth-token.entity.js';
+import { MembershipSchema } from './modules/organization/membership.entity.js';
+import { OrganizationSchema } from './modules/organization/organization.entity.js';
+import { SessionSchema } from './modules/session/session.entity.js';
+import { UserSchema } from './modules/user/user.entity.js';
+import { WorkspaceSchema } from './modules/workspace/workspace.entity.js';
+
+/** Every entity schema; new modules add theirs here (and a migration in src/migrations). */
+export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema];

@@ -1,0 +1,49 @@
+import { EntitySchema } from '@mikro-orm/core';
+import type { Organization } from '../organization/organization.entity.js';
+import type { User } from '../user/user.entity.js';
+
+/** Audit actions recorded so far (later features add theirs here). */
+export const AUDIT_ACTIONS = [
+  'auth.sign_in',
+  'auth.sign_in_failed',
+  'auth.sign_up',
+  'auth.sign_out',
+  'auth.password_reset',
+  'organization.create',
+  'organization.rename',
+  'workspace.create',
+  'workspace.update',
+  'workspace.delete',
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+
+/**
+ * One recorded action. Sequential integer id gives a stable order for `before=` paging.
+ * `organization` is null for account-level events (sign-in etc.); `details` never holds passwords,
+ * tokens or e-mail addresses.
+ */
+export interface AuditEvent {
+  id: number;
+  organization: Organization | null;
+  actor: User | null;
+  action: AuditAction;
+  targetType: string | null;
+  targetId: string | null;
+  details: Record<string, unknown>;
+  createdAt: Date;
+}
+
+export const AuditEventSchema = new EntitySchema<AuditEvent>({
+  name: 'AuditEvent',
+  tableName: 'audit_events',
+  properties: {
+    id: { type: 'integer', primary: true, autoincrement: true },
+    organization: { kind: 'm:1', entity: 'Organization', nullable: true, deleteRule: 'cascade' },
+    actor: { kind: 'm:1', entity: 'User', nullable: true, deleteRule: 'set null' },
+    action: { type: 'string', length: 64 },
+    targetType: { type: 'string', length: 40, nullable: true },
+    targetId: { type: 'string', length: 64, nullable: true },
+    details: { type: 'json' },
+    createdAt: { type: 'Date', onCreate: () => new Date() },
+  },
+});

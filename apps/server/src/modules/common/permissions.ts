@@ -1,0 +1,18 @@
+import { ROLES, type Role } from '../organization/membership.entity.js';
+
+/**
+ * Which roles may do what, per organization (PRODUCT.md rights table). Routes pass one of these
+ * lists to `requireMembership`; later features add their rows here.
+ */
+export const PERMISSIONS = {
+  'organization.read': ROLES,
+  'organization.rename': ['owner'],
+  'members.read': ROLES,
+  'audit.read': ['owner'],
+  'workspace.read': ROLES,
+  'workspace.create': ['owner', 'analyst', 'planner'],
+  'workspace.update': ['owner', 'analyst', 'planner'],
+  'workspace.delete': ['owner', 'analyst'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof PERMISSIONS;
