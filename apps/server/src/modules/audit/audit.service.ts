@@ -24,7 +24,7 @@ export function auditRecord(
   return em.create(AuditEventSchema, {
     action: entry.action,
     organization: entry.organizationId ? em.getReference('Organization', entry.organizationId) : null,
-    actor: entry.actor ? em.getReference('User', entry.actor.id) : null,
+    actor: entry.actor ?? null,
     targetType: entry.target?.type ?? null,
     targetId: entry.target?.id ?? null,
     details: entry.details ?? {},

@@ -1,6 +1,7 @@
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { AuthTokenSchema, type AuthToken, type AuthTokenPurpose } from './auth-token.entity.js';
+import { entityId } from '../common/base.entity.js';
 import { TokenInvalidError } from '../common/errors.js';
 import type { User } from '../user/user.entity.js';
 
@@ -21,7 +22,7 @@ function tokenDigest(raw: string): string {
  */
 export function authTokenIssue(em: EntityManager, user: User, purpose: AuthTokenPurpose, ttlMs: number): string {
   const raw = randomBytes(32).toString('base64url');
-  em.create(AuthTokenSchema, { user, purpose, tokenHash: tokenDigest(raw), expiresAt: new Date(Date.now() + ttlMs), usedAt: null } as AuthToken);
+  em.create(AuthTokenSchema, { id: entityId(), user, purpose, tokenHash: tokenDigest(raw), expiresAt: new Date(Date.now() + ttlMs), usedAt: null } as AuthToken);
   return raw;
 }
 

@@ -121,7 +121,10 @@ export function authRoutes(deps: AuthRouteDeps): Router {
   router.get('/google/callback', async (req, res, next) => {
     if (!deps.googleEnabled) return res.redirect(302, '/sign-in?error=google');
     const user = await new Promise<User | false>((resolve) => {
-      passport.authenticate('google', { session: false }, (err: unknown, found: User | false) => resolve(err ? false : found))(req, res, next);
+      passport.authenticate('google', { session: false }, (err: unknown, found: User | false) => {
+        if (err) req.log.warn({ err }, 'Google sign-in failed');
+        resolve(err ? false : found);
+      })(req, res, next);
     });
     if (!user) return res.redirect(302, '/sign-in?error=google');
     await signIn(req, user);

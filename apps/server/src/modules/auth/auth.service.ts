@@ -2,6 +2,7 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { authTokenConsume, authTokenIssue, authTokenRevokeAll } from './auth-token.service.js';
 import { passwordHash, passwordMatches } from './password-hash.js';
 import { auditRecord } from '../audit/audit.service.js';
+import { entityId } from '../common/base.entity.js';
 import { ConflictError } from '../common/errors.js';
 import type { Mailer } from '../mail/mailer.js';
 import { passwordResetMail, verificationMail } from '../mail/mail-templates.js';
@@ -32,6 +33,7 @@ export async function authSignUp(deps: AuthDeps, input: { email: string; passwor
     throw new ConflictError('EMAIL_TAKEN', 'An account with this e-mail already exists. Sign in, or reset the password.', 'email');
   }
   const user = em.create(UserSchema, {
+    id: entityId(),
     email: input.email,
     name: input.name,
     passwordHash: await passwordHash(input.password),
@@ -162,6 +164,7 @@ export async function authGoogleUser(em: EntityManager, identity: GoogleIdentity
     return existing;
   }
   const user = em.create(UserSchema, {
+    id: entityId(),
     email,
     name: identity.name.trim().slice(0, 120) || email.split('@')[0],
     passwordHash: null,

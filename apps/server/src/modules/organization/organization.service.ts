@@ -3,6 +3,7 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { OrganizationSchema, type Organization } from './organization.entity.js';
 import { MembershipSchema, type Membership, type Role } from './membership.entity.js';
 import { auditRecord } from '../audit/audit.service.js';
+import { entityId } from '../common/base.entity.js';
 import type { User } from '../user/user.entity.js';
 
 /** An organization as the API returns it. */
@@ -68,8 +69,8 @@ export async function organizationCreate(em: EntityManager, creator: User, name:
   const base = organizationSlug(name);
   let slug = base;
   while (await em.count(OrganizationSchema, { slug })) slug = `${base}-${randomBytes(3).toString('hex')}`;
-  const org = em.create(OrganizationSchema, { name, slug } as Organization);
-  em.create(MembershipSchema, { organization: org, user: em.getReference('User', creator.id), role: 'owner' } as Membership);
+  const org = em.create(OrganizationSchema, { id: entityId(), name, slug } as Organization);
+  em.create(MembershipSchema, { id: entityId(), organization: org, user: em.getReference('User', creator.id), role: 'owner' } as Membership);
   auditRecord(em, { action: 'organization.create', organizationId: org.id, actor: creator, target: { type: 'organization', id: org.id }, details: { name } });
   await em.flush();
   return org;

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { WorkspaceSchema, type Workspace } from './workspace.entity.js';
 import { auditRecord } from '../audit/audit.service.js';
+import { entityId } from '../common/base.entity.js';
 import { NotFoundError } from '../common/errors.js';
 import type { User } from '../user/user.entity.js';
 
@@ -71,6 +72,7 @@ export async function workspaceGet(em: EntityManager, organizationId: string, wo
  */
 export async function workspaceCreate(em: EntityManager, organizationId: string, actor: User, input: { name: string; description?: string }): Promise<WorkspaceView> {
   const w = em.create(WorkspaceSchema, {
+    id: entityId(),
     organization: em.getReference('Organization', organizationId),
     name: input.name,
     description: input.description ?? '',
