@@ -1,0 +1,77 @@
+import { screen, within } from '@testing-library/react';
+import { http, HttpResponse } from 'msw';
+import { describe, expect, it } from 'vitest';
+import { createMe, createOrganization, createWorkspace } from '../../../testing/data-generators';
+import { server } from '../../../testing/mocks/server';
+import { renderApp, renderWithProviders } from '../../../testing/test-utils';
+import { AppNav } from '../app-nav';
+
+describe('AppNav', () => {
+  it('hides the owner-only audit log from an executive', () => {
+    renderWithProviders(<AppNav orgId="org_1" role="executive" />);
+    const nav = screen.getByRole('navigation', { name: 'Organization' });
+    expect(within(nav).getByRole('link', { name: 'Workspaces' })).toHaveAttribute('href', '/orgs/org_1/workspaces');
+    expect(within(nav).getByRole('link', { name: 'Members' })).toBeInTheDocument();
+    expect(within(nav).queryByRole('link', { name: 'Audit log' })).not.toBeInTheDocument();
+  });
+
+  it('shows the audit log to an owner', () => {
+    renderWithProviders(<AppNav orgId="org_1" role="owner" />);
+    expect(screen.getByRole('link', { name: 'Audit log' })).toHaveAttribute('href', '/orgs/org_1/audit-log');
+  });
+});
+
+describe('the signed-in shell', () => {
+  function signedInAs(role: 'owner' | 'executive') {
+    const org = createOrganization({ id: 'org_1', name: 'Larchloaf', role });
+    server.use(
+      http.get('*/api/me', () => HttpResponse.json(createMe([org]))),
+      http.get('*/api/organizations', () => HttpResponse.json({ organizations: [org] })),
+      http.get('*/api/organizations/org_1/workspaces', () =>
+        HttpResponse.json({ workspaces: [createWorkspace({ name: 'Harbour front 2027' })] }),
+      ),
+    );
+  }
+
+  it('gives an executive no audit log and no "New workspace" button', async () => {
+    signedInAs('executive');
+    renderApp('/orgs/org_1/workspaces');
+    expect(await screen.findByText('Harbour front 2027')).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Workspaces' })).toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: 'Audit log' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'New workspace' })).not.toBeInTheDocument();
+  });
+
+  it('gives an owner the audit log and the "New workspace" button', async () => {
+    signedInAs('owner');
+    renderApp('/orgs/org_1/workspaces');
+    expect(await screen.findByText('Harbour front 2027')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Audit log' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'New workspace' })).toBeInTheDocument();
+  });
+
+  it('tells an executive who opens the audit log address that it is for owners', async () => {
+    signedInAs('executive');
+    renderApp('/orgs/org_1/audit-log');
+    expect(await screen.findByText('Not available for your role')).toBeInTheDocument();
+    expect(screen.getByText('Only owners of this organization can read its audit log.')).toBeInTheDocument();
+  });
+
+  it('sends a signed-out visitor to sign-in and keeps the path to return to', async () => {
+    const { router } = renderApp('/orgs/org_1/members');
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe(`?redirectTo=${encodeURIComponent('/orgs/org_1/members')}`);
+  });
+
+  it('shows the not-found page for an organization the user is not in', async () => {
+    signedInAs('owner');
+    renderApp('/orgs/org_someone_else/workspaces');
+    expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
+  });
+
+  it('shows the not-found page for an unknown address', async () => {
+    renderApp('/no/such/page');
+    expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
+  });
+});

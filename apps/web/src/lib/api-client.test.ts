@@ -1,0 +1,80 @@
+import { http, HttpResponse } from 'msw';
+import { describe, expect, it } from 'vitest';
+import { TEST_CSRF_TOKEN } from '../testing/mocks/handlers';
+import { server } from '../testing/mocks/server';
+import { api, resetCsrfToken } from './api-client';
+import { ApiError } from './api-error';
+
+describe('apiRequest', () => {
+  it('fetches the CSRF token once and sends it on every mutation, never on reads', async () => {
+    let tokenRequests = 0;
+    const seen: (string | null)[] = [];
+    server.use(
+      http.get('*/api/auth/csrf', () => {
+        tokenRequests += 1;
+        return HttpResponse.json({ csrfToken: TEST_CSRF_TOKEN });
+      }),
+      http.all('*/api/things', ({ request }) => {
+        seen.push(request.headers.get('x-csrf-token'));
+        return HttpResponse.json({ ok: true });
+      }),
+    );
+    await api.get('/things');
+    await api.post('/things', { a: 1 });
+    await api.patch('/things', { a: 2 });
+    await api.delete('/things');
+    expect(seen).toEqual([null, TEST_CSRF_TOKEN, TEST_CSRF_TOKEN, TEST_CSRF_TOKEN]);
+    expect(tokenRequests).toBe(1);
+  });
+
+  it('fetches a fresh token and retries once when the server rejects the token', async () => {
+    const tokens = ['stale-token', 'fresh-token'];
+    const attempts: (string | null)[] = [];
+    resetCsrfToken();
+    server.use(
+      http.get('*/api/auth/csrf', () => HttpResponse.json({ csrfToken: tokens.shift() })),
+      http.post('*/api/things', ({ request }) => {
+        const token = request.headers.get('x-csrf-token');
+        attempts.push(token);
+        if (token !== 'fresh-token') {
+          return HttpResponse.json({ error: { code: 'CSRF_INVALID', message: 'Bad token.' } }, { status: 403 });
+        }
+        return HttpResponse.json({ ok: true });
+      }),
+    );
+    await expect(api.post('/things', {})).resolves.toEqual({ ok: true });
+    expect(attempts).toEqual(['stale-token', 'fresh-token']);
+  });
+
+  it('turns an error body into a typed ApiError with code and field', async () => {
+    server.use(
+      http.post('*/api/things', () =>
+        HttpResponse.json(
+          { error: { code: 'VALIDATION_FAILED', message: 'Name is required.', field: 'name', fields: { name: 'Name is required.' } } },
+          { status: 400 },
+        ),
+      ),
+    );
+    const error = await api.post('/things', {}).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(ApiError);
+    expect(error).toMatchObject({ status: 400, code: 'VALIDATION_FAILED', field: 'name', message: 'Name is required.' });
+  });
+
+  it('explains an error response that is not in the API shape', async () => {
+    server.use(http.get('*/api/things', () => new HttpResponse('<html>Bad gateway</html>', { status: 502 })));
+    const error = await api.get('/things').catch((e: unknown) => e);
+    expect(error).toMatchObject({ status: 502, code: 'HTTP_ERROR' });
+    expect((error as Error).message).toContain('502');
+  });
+
+  it('reports an unreachable server as a network error', async () => {
+    server.use(http.get('*/api/things', () => HttpResponse.error()));
+    const error = await api.get('/things').catch((e: unknown) => e);
+    expect(error).toMatchObject({ status: 0, code: 'NETWORK_ERROR' });
+  });
+
+  it('returns undefined for 204 No Content', async () => {
+    server.use(http.delete('*/api/things', () => new HttpResponse(null, { status: 204 })));
+    await expect(api.delete('/things')).resolves.toBeUndefined();
+  });
+});

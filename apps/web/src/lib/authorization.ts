@@ -1,0 +1,33 @@
+import type { Role } from '../types/api';
+
+/** What each role may do in an organization (PRODUCT.md rights table); the server enforces the same. */
+const permissionRoles = {
+  'audit-log:read': ['owner'],
+  'organization:rename': ['owner'],
+  'members:read': ['owner', 'analyst', 'planner', 'executive'],
+  'workspace:read': ['owner', 'analyst', 'planner', 'executive'],
+  'workspace:create': ['owner', 'analyst', 'planner'],
+  'workspace:update': ['owner', 'analyst', 'planner'],
+  'workspace:delete': ['owner', 'analyst'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof permissionRoles;
+
+/**
+ * Whether a role may use a capability; the UI hides what the answer is no for.
+ * @param role the member's role in the current organization
+ * @param permission the capability
+ * @returns true when allowed
+ * @example roleCan('executive', 'workspace:create') // false
+ */
+export function roleCan(role: Role | undefined, permission: Permission): boolean {
+  return role !== undefined && (permissionRoles[permission] as readonly Role[]).includes(role);
+}
+
+/** Plain-words label for each role, shown in badges and lists. */
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner',
+  analyst: 'Analyst',
+  planner: 'Planner',
+  executive: 'Executive',
+};
