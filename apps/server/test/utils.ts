@@ -2,6 +2,8 @@ import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent.js';
 import { createApp, type DemandscapeApp } from '../src/app.js';
 import { configFromEnv } from '../src/config.js';
+import { entityId } from '../src/modules/common/base.entity.js';
+import { MembershipSchema, type Role } from '../src/modules/organization/membership.entity.js';
 
 /**
  * A fresh app on an in-memory SQLite database (migrations applied), capturing e-mail.
@@ -95,4 +97,20 @@ export function mailedToken(ds: DemandscapeApp, to: string, pathPart: string): s
   const token = new URL(match[0]).searchParams.get('token');
   if (!token) throw new Error('link has no token');
   return token;
+}
+
+/**
+ * Adds a membership directly in the database (invitations come later).
+ * @param ds - the app
+ * @param organizationId - the organization
+ * @param userId - the user
+ * @param role - the role
+ * @returns nothing
+ * @example
+ * await testMembershipAdd(ds, orgId, userId, 'planner');
+ */
+export async function testMembershipAdd(ds: DemandscapeApp, organizationId: string, userId: string, role: Role): Promise<void> {
+  const em = ds.orm.em.fork();
+  em.create(MembershipSchema, { id: entityId(), organization: organizationId, user: userId, role } as never);
+  await em.flush();
 }
