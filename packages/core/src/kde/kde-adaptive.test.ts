@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { randomSeeded } from '../lib/random-seeded.js';
 import type { GridSpec, PlanarPoints } from '../types.js';
-import { ADAPTIVE_MAX_FACTOR, gridValueBilinear, kdeAdaptive, kdeAdaptiveBandwidths } from './kde-adaptive.js';
+import { ADAPTIVE_MAX_FACTOR, kdeAdaptive, kdeAdaptiveBandwidths } from './kde-adaptive.js';
 import { kdeExact } from './kde-exact.js';
 import { kdeExactAt } from './kde-exact-at.js';
 
@@ -21,16 +21,6 @@ function coreAndHalo(n: number): PlanarPoints {
   }
   return { x, y, w };
 }
-
-describe('gridValueBilinear', () => {
-  it('reproduces a plane exactly and clamps beyond the outer centres', () => {
-    const g: GridSpec = { originX: 0, originY: 0, cellSize: 10, width: 4, height: 3 };
-    const v = new Float64Array(12);
-    for (let j = 0; j < 3; j++) for (let i = 0; i < 4; i++) v[i + j * 4] = 2 * i - 3 * j;
-    expect(gridValueBilinear(v, g, 22, 13)).toBeCloseTo(2 * 1.7 - 3 * 0.8, 12);
-    expect(gridValueBilinear(v, g, -50, 5)).toBe(0);
-  });
-});
 
 /** A uniform square of 6 km with a dense 1 km patch in the middle: density ratio ≈ 13, nothing clamps. */
 function squareAndPatch(): PlanarPoints {

@@ -1,3 +1,4 @@
+import { gridBilinearAt } from '../grid/grid-bilinear-at.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeBinned } from './kde-binned.js';
 import { kdeBinnedMeetsBound } from './kde-cell-rule.js';
@@ -24,37 +25,6 @@ export interface KdeAdaptiveBandwidths {
   gamma: number;
   /** The pilot grid (weight per m²). */
   pilotGrid: Float64Array;
-}
-
-/**
- * Bilinear value of a grid at (x, y); positions beyond the outermost cell centres take the
- * nearest edge value.
- *
- * @param values grid values, row-major
- * @param spec the grid
- * @param x metres
- * @param y metres
- * @returns the interpolated value
- * @example
- * gridValueBilinear(surface, spec, 1234, 5678);
- */
-export function gridValueBilinear(values: Float64Array, spec: GridSpec, x: number, y: number): number {
-  const { width, height } = spec;
-  const fx = Math.min(width - 1, Math.max(0, (x - spec.originX) / spec.cellSize - 0.5));
-  const fy = Math.min(height - 1, Math.max(0, (y - spec.originY) / spec.cellSize - 0.5));
-  const i = Math.min(width - 2, Math.floor(fx));
-  const j = Math.min(height - 2, Math.floor(fy));
-  if (width === 1 || height === 1) {
-    // Degenerate one-row or one-column grids: interpolate along the one axis that has length.
-    const k = width === 1 ? Math.round(fy) : Math.round(fx);
-    return values[k];
-  }
-  const tx = fx - i;
-  const ty = fy - j;
-  const c = i + j * width;
-  return (
-    (1 - ty) * ((1 - tx) * values[c] + tx * values[c + 1]) + ty * ((1 - tx) * values[c + width] + tx * values[c + width + 1])
-  );
 }
 
 /**
@@ -91,8 +61,13 @@ export function kdeAdaptiveBandwidths(
   const pilot = new Float64Array(n);
   let logSum = 0;
   let wSum = 0;
+  const xMax = spec.originX + spec.width * spec.cellSize;
+  const yMax = spec.originY + spec.height * spec.cellSize;
   for (let k = 0; k < n; k++) {
-    const f = gridValueBilinear(grid.values, spec, points.x[k], points.y[k]);
+    // Points outside the grid read the pilot at the nearest point of the grid's rectangle.
+    const px = Math.min(xMax, Math.max(spec.originX, points.x[k]));
+    const py = Math.min(yMax, Math.max(spec.originY, points.y[k]));
+    const f = gridBilinearAt(grid.values, spec, px, py);
     pilot[k] = f;
     if (f > 0 && points.w[k] > 0) {
       logSum += points.w[k] * Math.log(f);
