@@ -56,5 +56,10 @@ export function VerifyEmailStatus({ token }: { token: string | null }) {
       </div>
     );
   }
-  return <Spinner label="Confirming your e-mail address" className="justify-center" />;
+  return (
+    <div role="status" className="flex items-center gap-3 text-sm text-ink-muted">
+      <Spinner label="" />
+      Confirming your e-mail address…
+    </div>
+  );
 }
