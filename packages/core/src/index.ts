@@ -22,6 +22,7 @@ export * from './kde/kde-binned.js';
 export * from './kde/kde-cell-rule.js';
 export * from './kde/kde-adaptive.js';
 export * from './kde/kde-edge.js';
+export * from './kde/kde-contributor-counts.js';
 export * from './kde/kde-cost.js';
 export * from './kde/density-validate.js';
 export * from './kde/density-surface.js';

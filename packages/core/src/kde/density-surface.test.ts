@@ -90,16 +90,21 @@ describe('densitySurface', () => {
     expect([s.stats.maxCell.i, s.stats.maxCell.j]).toEqual([36, 37]);
   });
 
-  it('counts contributors per cell with the exact method', () => {
-    const s = densitySurface(points([0, 100], [0, 0], [1, 1]), centred(41, 25), {
-      kernel: 'quartic',
-      bandwidth: 200,
-      method: 'exact',
-      countContributors: true,
+  for (const method of ['exact', 'binned'] as const) {
+    it(`counts contributors per cell with the ${method} method`, () => {
+      const s = densitySurface(points([0, 100], [0, 0], [1, 1]), centred(41, 25), {
+        kernel: 'quartic',
+        bandwidth: 200,
+        method,
+        countContributors: true,
+      });
+      expect(s.contributors![20 + 20 * 41]).toBe(2);
+      expect(s.contributors![24 + 20 * 41]).toBe(2); // 100 m east: 100 m from both
+      expect(s.contributors![13 + 20 * 41]).toBe(1); // 175 m west: only the first point is within 200 m
+      expect(s.contributors![12 + 20 * 41]).toBe(0); // 200 m west: exactly at the radius, K = 0
+      expect(s.contributors![20 + 30 * 41]).toBe(0);
     });
-    expect(s.contributors![20 + 20 * 41]).toBe(2);
-    expect(s.contributors![20 + 30 * 41]).toBe(0);
-  });
+  }
 
   it('adaptive: returns per-point bandwidths and runs the exact sum', () => {
     const p = points([0, 30, -40, 2000], [0, 10, 25, -1500], [1, 1, 1, 1]);

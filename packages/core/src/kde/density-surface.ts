@@ -3,6 +3,7 @@ import type { DensityMethod, GridSpec, KernelName, PlanarPoints } from '../types
 import { densityInputValidate } from './density-validate.js';
 import { kdeAdaptive } from './kde-adaptive.js';
 import { kdeBinned } from './kde-binned.js';
+import { kdeContributorCounts } from './kde-contributor-counts.js';
 import { densityMethodCost } from './kde-cost.js';
 import { kdeEdgeCorrect, kdeEdgeFactor } from './kde-edge.js';
 import { kdeExact } from './kde-exact.js';
@@ -23,7 +24,7 @@ export interface DensitySurfaceOptions {
   mask?: Uint8Array;
   /** Diggle's uniform edge correction against the study area (or the grid rectangle). */
   edgeCorrection?: boolean;
-  /** Count distinct contributing points per cell (exact method only; for small-count suppression). */
+  /** Count distinct contributing points per cell (for small-count suppression), whatever the method. */
   countContributors?: boolean;
   signal?: AbortSignal;
   onProgress?: (fraction: number) => void;
@@ -56,7 +57,7 @@ export interface DensitySurface {
   intensity: Float64Array;
   /** intensity / Σw: a probability density per km². */
   share: Float64Array;
-  /** Distinct contributing points per cell, when requested and the exact method ran. */
+  /** Distinct contributing points per cell, when requested. */
   contributors?: Uint32Array;
   method: DensityMethod;
   stats: DensitySurfaceStats;
@@ -121,6 +122,9 @@ export function densitySurface(points: PlanarPoints, spec: GridSpec, options: De
       method === 'binned'
         ? kdeBinned(points, spec, kernel, bandwidth, { mask, signal, onProgress: progress })
         : kdeExact(points, spec, kernel, bandwidth, { mask, signal, onProgress: progress, countContributors: options.countContributors });
+    if (method === 'binned' && options.countContributors) {
+      result.contributors = kdeContributorCounts(points, spec, kernel, bandwidth, { mask, signal });
+    }
   }
   const values = result.values;
   if (edge) {
