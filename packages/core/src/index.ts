@@ -32,3 +32,8 @@ export * from './bandwidth/bandwidth-normal-reference.js';
 export * from './bandwidth/bandwidth-cv-criteria.js';
 export * from './bandwidth/bandwidth-cross-validation.js';
 export * from './bandwidth/bandwidth-by-rule.js';
+export * from './contours/contour-geojson.js';
+export * from './contours/contour-percent-volume.js';
+export * from './contours/contour-polygons.js';
+export * from './contours/contour-isolines.js';
+export * from './contours/contour-to-lon-lat.js';
