@@ -3,6 +3,7 @@ import { kernelByName, type Kernel } from '../kernels/kernels.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeContributingPoints } from './kde-contributing.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
+import { kdeRowRun } from './kde-row-run.js';
 import { kernelStencil, REACH_SQ_SHRINK, stencilSubOffsets } from './kde-stencil.js';
 
 export interface KdeExactOptions extends KdeGridOptions {
@@ -66,14 +67,23 @@ export function kdeExact(
     const budget = Math.max(1, Math.floor(VISITS_PER_CHUNK / visitsPerPoint(bandwidth)));
     const end = Math.min(n, i + budget);
     if (s === 1) {
-      sumCentres(points, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors);
+      sumCentres(points, i, end, spec, kernel, bandwidth, bandwidths, values, contributors);
     } else {
       sumCellMeans(points, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors, s);
     }
     i = end;
     onProgress?.(i / n);
   }
-  if (mask) for (let c = 0; c < values.length; c++) if (!mask[c]) values[c] = 0;
+  // Cells outside the study area are summed like the others (a branch in the hot loop costs more
+  // than the wasted cells) and cleared here.
+  if (mask) {
+    for (let c = 0; c < values.length; c++) {
+      if (!mask[c]) {
+        values[c] = 0;
+        if (contributors) contributors[c] = 0;
+      }
+    }
+  }
   return {
     values,
     contributors,
@@ -83,9 +93,10 @@ export function kdeExact(
 }
 
 /**
- * Centre samples. Per row only the run of cells inside the disc is visited; the Gaussian uses
- * e^{−(dx²+dy²)/2} = e^{−dx²/2}·e^{−dy²/2} (one exp per column and row instead of per cell) and
- * the (1 − r²)^q kernels are evaluated inline — the two hot loops of the engine.
+ * Centre samples. Per row only the run of cells inside the disc is visited ({@link kdeRowRun},
+ * the same test the contributor counts use); each kernel family gets its own branch-free loop over the run: the
+ * Gaussian uses e^{−(dx²+dy²)/2} = e^{−dx²/2}·e^{−dy²/2} (one exp per column and row), the
+ * (1 − r²)^q kernels are evaluated inline.
  */
 function sumCentres(
   points: PlanarPoints,
@@ -95,7 +106,6 @@ function sumCentres(
   kernel: Kernel,
   bandwidth: number,
   bandwidths: Float64Array | undefined,
-  mask: Uint8Array | undefined,
   values: Float64Array,
   contributors: Uint32Array | undefined,
 ): void {
@@ -107,6 +117,7 @@ function sumCentres(
   // Constant of c(1 − r²)^q, and of the Gaussian: K(0).
   const c0 = kernel.valueSq(0);
   const colFactor = gaussian ? new Float64Array(width) : undefined;
+  const run = new Int32Array(2);
   for (let k = from; k < to; k++) {
     const wk = w[k];
     if (wk === 0) continue;
@@ -132,32 +143,44 @@ function sumCentres(
     for (let j = j0; j <= j1; j++) {
       const dy = (j - fy) * stepR;
       const dy2 = dy * dy;
-      if (dy2 >= reach2) continue;
-      const half = Math.sqrt(reach2 - dy2) / stepR;
-      const a = Math.max(i0, Math.ceil(fx - half));
-      const b = Math.min(i1, Math.floor(fx + half));
+      kdeRowRun(fx, stepR, dy2, reach2, i0, i1, run);
+      const a = run[0];
+      const b = run[1];
+      if (a > b) continue;
       const row = j * width;
-      const rowScale = gaussian ? scale * c0 * Math.exp(-0.5 * dy2) : scale * c0;
-      for (let i = a; i <= b; i++) {
-        const dx = (i - fx) * stepR;
-        const r2 = dx * dx + dy2;
-        if (r2 >= reach2) continue;
-        const cell = row + i;
-        if (mask !== undefined && mask[cell] === 0) continue;
-        let v: number;
-        if (colFactor) v = colFactor[i];
-        else if (q === 2) {
-          const t = 1 - r2;
-          v = t * t;
-        } else if (q === 1) v = 1 - r2;
-        else if (q === 3) {
-          const t = 1 - r2;
-          v = t * t * t;
-        } else if (q === 0) v = 1;
-        else v = kernel.valueSq(r2) / c0;
-        values[cell] += rowScale * v;
-        if (contributors !== undefined) contributors[cell]++;
+      if (colFactor) {
+        const rowScale = scale * c0 * Math.exp(-0.5 * dy2);
+        for (let i = a; i <= b; i++) values[row + i] += rowScale * colFactor[i];
+      } else if (q === 2) {
+        const rowScale = scale * c0;
+        for (let i = a; i <= b; i++) {
+          const dx = (i - fx) * stepR;
+          const t = 1 - (dx * dx + dy2);
+          values[row + i] += rowScale * t * t;
+        }
+      } else if (q === 1) {
+        const rowScale = scale * c0;
+        for (let i = a; i <= b; i++) {
+          const dx = (i - fx) * stepR;
+          values[row + i] += rowScale * (1 - (dx * dx + dy2));
+        }
+      } else if (q === 3) {
+        const rowScale = scale * c0;
+        for (let i = a; i <= b; i++) {
+          const dx = (i - fx) * stepR;
+          const t = 1 - (dx * dx + dy2);
+          values[row + i] += rowScale * t * t * t;
+        }
+      } else if (q === 0) {
+        const rowScale = scale * c0;
+        for (let i = a; i <= b; i++) values[row + i] += rowScale;
+      } else {
+        for (let i = a; i <= b; i++) {
+          const dx = (i - fx) * stepR;
+          values[row + i] += scale * kernel.valueSq(dx * dx + dy2);
+        }
       }
+      if (contributors !== undefined) for (let i = a; i <= b; i++) contributors[row + i]++;
     }
   }
 }
