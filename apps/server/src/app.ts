@@ -48,7 +48,7 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   const log = loggerCreate(config.logLevel);
   const orm = await ormInit(config.databaseFile, (message) => log.info({ component: 'orm' }, message));
   const em = orm.em;
-  const mailer = mailerCreate(config.mail);
+  const mailer = mailerCreate(config.mail, log);
   const sessionStore = new SqliteSessionStore(orm, config.sessionTtlMs);
   const passport = passportCreate(em, config);
   const pruneTimer = setInterval(() => void sessionStore.prune().catch((err) => log.warn({ err }, 'session prune failed')), 3600_000);
