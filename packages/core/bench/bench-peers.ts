@@ -99,5 +99,5 @@ export function kernsmoothRun(
   const out = spawnSync('Rscript', args, { encoding: 'utf8' });
   if (out.status !== 0) throw new Error(`Rscript peer failed: ${out.stderr}`);
   const r = JSON.parse(out.stdout.trim()) as { label: string; seconds: number };
-  return { id: 'kernsmooth', label: r.label, seconds: r.seconds, extrapolated: false, note: 'full grid, measured (weights ignored: bkde2D has none)' };
+  return { id: 'kernsmooth', label: r.label, seconds: r.seconds, extrapolated: false, note: 'full grid, fastest of 3 (weights ignored: bkde2D has none)' };
 }
