@@ -6,7 +6,6 @@ import { kernelSelfConvolution } from '../lib/kernel-self-convolution.js';
 import { randomSampleIndices } from '../lib/random-sample-indices.js';
 import { randomSeeded } from '../lib/random-seeded.js';
 import { pointsMergeCoincident } from '../points/points-merge-coincident.js';
-import { pointsSpread } from '../points/points-spread.js';
 import type { KernelName, PlanarPoints } from '../types.js';
 import { cvLeastSquaresScore, cvLikelihoodScore } from './bandwidth-cv-criteria.js';
 import { bandwidthNormalReference } from './bandwidth-normal-reference.js';
@@ -118,8 +117,8 @@ export function bandwidthCrossValidation(
   // 1e-3 in log h is a 0.1 % bandwidth step, far finer than the criterion's sampling noise.
   const tBest = goldenSectionMinimize(cost, t0 + Math.max(0, best - 1) * dt, t0 + Math.min(steps - 1, best + 1) * dt, 1e-3);
   const hSample = Math.exp(cost(tBest) <= bestCost ? tBest : t0 + best * dt);
-  const nEffSample = pointsSpread(sample).nEff;
-  const nEffAll = pointsSpread(all).nEff;
+  const nEffSample = kishNEff(sample.w);
+  const nEffAll = kishNEff(all.w);
   const scaled = hSample * Math.pow(nEffSample / nEffAll, 1 / 6);
   const value = cvKernel === kernel ? scaled : kernelBandwidthConvert(scaled, cvKernel, kernel);
   const searchEdge = best === 0 ? 'lower' : best === steps - 1 ? 'upper' : undefined;
@@ -151,4 +150,15 @@ function pick(p: PlanarPoints, idx: Uint32Array): PlanarPoints {
     out.w[k] = p.w[idx[k]];
   }
   return out;
+}
+
+/** Kish's effective sample size (Σw)² / Σw². */
+function kishNEff(w: Float64Array): number {
+  let s = 0;
+  let s2 = 0;
+  for (let i = 0; i < w.length; i++) {
+    s += w[i];
+    s2 += w[i] * w[i];
+  }
+  return (s * s) / s2;
 }

@@ -3,7 +3,7 @@ import type { GridSpec } from '../types.js';
 /**
  * The surface value at a planar point by bilinear interpolation between the four surrounding cell
  * centres. In the outer half-cell along the border the nearest centres' values are held constant;
- * outside the grid the result is NaN. NaN cells propagate.
+ * outside the grid the result is NaN. A NaN cell with non-zero weight makes the result NaN.
  *
  * @param values row-major cell values (index i + j·width, j = 0 south)
  * @param spec the grid
@@ -25,9 +25,14 @@ export function gridBilinearAt(values: ArrayLike<number>, spec: GridSpec, x: num
   const j1 = Math.min(j0 + 1, height - 1);
   const fx = gx - i0;
   const fy = gy - j0;
-  const v00 = values[i0 + j0 * width];
-  const v10 = values[i1 + j0 * width];
-  const v01 = values[i0 + j1 * width];
-  const v11 = values[i1 + j1 * width];
-  return (1 - fy) * ((1 - fx) * v00 + fx * v10) + fy * ((1 - fx) * v01 + fx * v11);
+  // Terms with zero weight are skipped so a NaN neighbour does not spoil a point on a centre line.
+  let s = 0;
+  const add = (wt: number, v: number): void => {
+    if (wt !== 0) s += wt * v;
+  };
+  add((1 - fx) * (1 - fy), values[i0 + j0 * width]);
+  add(fx * (1 - fy), values[i1 + j0 * width]);
+  add((1 - fx) * fy, values[i0 + j1 * width]);
+  add(fx * fy, values[i1 + j1 * width]);
+  return s;
 }

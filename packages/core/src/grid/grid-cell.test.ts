@@ -37,6 +37,13 @@ describe('gridBilinearAt', () => {
     expect(gridBilinearAt(values, spec, 99, 205)).toBeNaN();
     expect(gridBilinearAt(values, spec, 120, 231)).toBeNaN();
   });
+  it('is NaN next to a NaN cell but exact on the centre of a valid neighbour', () => {
+    const v = Float64Array.of(1, NaN, 3, 4);
+    const s2 = { originX: 0, originY: 0, cellSize: 10, width: 2, height: 2 };
+    expect(gridBilinearAt(v, s2, 10, 10)).toBeNaN();
+    expect(gridBilinearAt(v, s2, 5, 5)).toBe(1);
+    expect(gridBilinearAt(v, s2, 5, 10)).toBe(2);
+  });
   it('works on a single-cell grid', () => {
     expect(gridBilinearAt(Float64Array.of(7), { originX: 0, originY: 0, cellSize: 1, width: 1, height: 1 }, 0.2, 0.9)).toBe(7);
   });

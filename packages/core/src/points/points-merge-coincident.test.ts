@@ -21,6 +21,16 @@ describe('pointsMergeCoincident', () => {
     const m = pointsMergeCoincident({ x: Float64Array.of(-0, 0), y: Float64Array.of(0, 0), w: Float64Array.of(1, 1) });
     expect(m.x.length).toBe(1);
   });
+  it('agrees with a string-keyed count on 50,000 rounded coordinates and keeps the total weight', () => {
+    const n = 50_000;
+    const x = Float64Array.from({ length: n }, (_, i) => ((i * 7919) % 173) * 10);
+    const y = Float64Array.from({ length: n }, (_, i) => ((i * 104729) % 211) * -5);
+    const w = Float64Array.from({ length: n }, (_, i) => (i % 5) + 0.5);
+    const m = pointsMergeCoincident({ x, y, w });
+    expect(m.x.length).toBe(new Set(Array.from(x, (v, i) => `${v} ${y[i]}`)).size);
+    expect(m.w.reduce((s, v) => s + v, 0)).toBeCloseTo(w.reduce((s, v) => s + v, 0), 6);
+    expect(m.count.reduce((s, v) => s + v, 0)).toBe(n);
+  });
   it('returns empty output for empty input', () => {
     expect(pointsMergeCoincident({ x: new Float64Array(0), y: new Float64Array(0), w: new Float64Array(0) }).x.length).toBe(0);
   });

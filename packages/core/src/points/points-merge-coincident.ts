@@ -19,29 +19,58 @@ export interface MergedPoints extends PlanarPoints {
  */
 export function pointsMergeCoincident(points: PlanarPoints): MergedPoints {
   const n = points.x.length;
-  const slot = new Map<string, number>();
+  const { x, y, w } = points;
+  // Open-addressing hash table over the coordinates' bit patterns (load factor ≤ 0.5).
+  let size = 16;
+  while (size < 2 * n) size *= 2;
+  const mask = size - 1;
+  const table = new Int32Array(size).fill(-1);
   const index = new Int32Array(n);
+  const first = new Int32Array(n);
+  const f64 = new Float64Array(2);
+  const u32 = new Uint32Array(f64.buffer);
   let m = 0;
   for (let i = 0; i < n; i++) {
-    // -0 and 0 are the same location; String() prints both as "0".
-    const key = `${points.x[i]} ${points.y[i]}`;
-    const s = slot.get(key);
-    if (s === undefined) {
-      slot.set(key, m);
-      index[i] = m++;
-    } else {
-      index[i] = s;
+    // + 0 turns -0 into 0 so both hash alike; equality below treats them as equal anyway.
+    const xi = x[i] + 0;
+    const yi = y[i] + 0;
+    f64[0] = xi;
+    f64[1] = yi;
+    let h = fmix32(u32[0] ^ fmix32(u32[1] ^ fmix32(u32[2] ^ fmix32(u32[3])))) & mask;
+    for (;;) {
+      const s = table[h];
+      if (s === -1) {
+        table[h] = m;
+        first[m] = i;
+        index[i] = m++;
+        break;
+      }
+      const r = first[s];
+      if (x[r] === xi && y[r] === yi) {
+        index[i] = s;
+        break;
+      }
+      h = (h + 1) & mask;
     }
   }
   const out: MergedPoints = { x: new Float64Array(m), y: new Float64Array(m), w: new Float64Array(m), count: new Uint32Array(m) };
+  for (let s = 0; s < m; s++) {
+    out.x[s] = x[first[s]] + 0;
+    out.y[s] = y[first[s]] + 0;
+  }
   for (let i = 0; i < n; i++) {
     const s = index[i];
-    if (out.count[s] === 0) {
-      out.x[s] = points.x[i];
-      out.y[s] = points.y[i];
-    }
-    out.w[s] += points.w[i];
+    out.w[s] += w[i];
     out.count[s]++;
   }
   return out;
+}
+
+/** MurmurHash3's 32-bit finaliser (Appleby, public domain): every input bit affects every output bit. */
+function fmix32(h: number): number {
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x85ebca6b);
+  h ^= h >>> 13;
+  h = Math.imul(h, 0xc2b2ae35);
+  return h ^ (h >>> 16);
 }

@@ -60,16 +60,33 @@ export function pointsSpread(points: PlanarPoints): PointsSpread {
     meanY,
     sdX,
     sdY,
-    iqrX: weightedQuantile(x, w, 0.75) - weightedQuantile(x, w, 0.25),
-    iqrY: weightedQuantile(y, w, 0.75) - weightedQuantile(y, w, 0.25),
+    iqrX: weightedIqr(x, w),
+    iqrY: weightedIqr(y, w),
   };
 }
 
-/** Weighted quantile with Hazen positions; zero-weight values are ignored. */
-function weightedQuantile(v: Float64Array, w: Float64Array, q: number): number {
-  const idx: number[] = [];
-  for (let i = 0; i < v.length; i++) if (w[i] > 0) idx.push(i);
+/** Weighted IQR from one sort; equal weights take the native numeric sort. */
+function weightedIqr(v: Float64Array, w: Float64Array): number {
+  let equal = true;
+  const w0 = w[0];
+  for (let i = 1; i < w.length && equal; i++) equal = w[i] === w0;
+  if (equal) {
+    const sorted = v.slice().sort();
+    const ones = new Float64Array(sorted.length).fill(1);
+    const all = Uint32Array.from({ length: sorted.length }, (_, i) => i);
+    return weightedQuantile(sorted, ones, all, 0.75) - weightedQuantile(sorted, ones, all, 0.25);
+  }
+  let m = 0;
+  for (let i = 0; i < v.length; i++) if (w[i] > 0) m++;
+  const idx = new Uint32Array(m);
+  m = 0;
+  for (let i = 0; i < v.length; i++) if (w[i] > 0) idx[m++] = i;
   idx.sort((a, b) => v[a] - v[b]);
+  return weightedQuantile(v, w, idx, 0.75) - weightedQuantile(v, w, idx, 0.25);
+}
+
+/** Weighted quantile with Hazen positions over indices `idx` sorted by value (positive weights only). */
+function weightedQuantile(v: Float64Array, w: Float64Array, idx: Uint32Array, q: number): number {
   let total = 0;
   for (const i of idx) total += w[i];
   const target = q * total;
