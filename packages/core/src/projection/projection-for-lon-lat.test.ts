@@ -12,8 +12,9 @@ describe('projectionForLonLat', () => {
     expect(p.centerLon).toBeCloseTo(3.5, 12);
   });
   it('works in open sea (the demo city is fictional and offshore)', () => {
-    const p = projectionForLonLat(f(-31.9, -31.7), f(-38.1, -37.9));
-    expect(p.epsg).toBe(32725);
+    expect(projectionForLonLat(f(-31.9, -31.7), f(-38.1, -37.9)).epsg).toBe(32725);
+    // The demo city's invented centre, 38.5°W 44.5°N: zone floor(141.5 / 6) + 1 = 24 north.
+    expect(projectionForLonLat(f(-38.7, -38.3), f(44.3, 44.7)).label).toBe('UTM zone 24N (EPSG:32624)');
   });
   it('uses the zone of the wrapped mean for data across the antimeridian', () => {
     const p = projectionForLonLat(f(179.4, -179.8), f(-17, -17));
