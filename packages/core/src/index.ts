@@ -37,3 +37,8 @@ export * from './contours/contour-percent-volume.js';
 export * from './contours/contour-polygons.js';
 export * from './contours/contour-isolines.js';
 export * from './contours/contour-to-lon-lat.js';
+export * from './kde/kde-exact-at.js';
+export * from './raster/geotiff-encode.js';
+export * from './pipeline/density-contours.js';
+export * from './pipeline/density-from-planar.js';
+export * from './pipeline/density-from-lon-lat.js';
