@@ -2,6 +2,7 @@ import { throwIfAborted } from '../errors.js';
 import { kernelByName } from '../kernels/kernels.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeExact } from './kde-exact.js';
+import { kdePointOrder } from './kde-point-order.js';
 import { kdeRowRun } from './kde-row-run.js';
 import { kernelStencil, REACH_SQ_SHRINK } from './kde-stencil.js';
 
@@ -52,8 +53,10 @@ export function kdeContributorCounts(
   const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
   const stepR = cellSize / bandwidth;
   const rc = (kernel.reach * bandwidth) / cellSize;
-  for (let k = 0; k < x.length; k++) {
-    if (k % POINTS_PER_CHUNK === 0) throwIfAborted(signal);
+  const order = kdePointOrder(points, spec);
+  for (let o = 0; o < order.length; o++) {
+    if (o % POINTS_PER_CHUNK === 0) throwIfAborted(signal);
+    const k = order[o];
     if (w[k] === 0) continue;
     // Same arithmetic as the exact sum: cell centre i sits at fx = i.
     const fx = (x[k] - originX) / cellSize - 0.5;

@@ -13,6 +13,8 @@ import { kernelStencil } from './kde-stencil.js';
 export const KDE_COST_SECONDS = {
   /** One kernel evaluation at one cell in the exact sum. */
   exactVisit: 3e-9,
+  /** One row run of the uniform disc's difference-array sum (0.88 s for 10⁵ points × 204 runs). */
+  discRowRun: 4.3e-8,
   /** One point spread over four lattice nodes (random order, so mostly cache misses). */
   binPoint: 1.5e-7,
   /** One element·log₂(size) of a 2-D real FFT, times the three FFTs of a convolution. */
@@ -69,7 +71,10 @@ export function densityMethodCost(
   const s = stencil.oversample;
   const rc = (k.reach * bandwidth) / spec.cellSize + (s > 1 ? 0.5 : 0);
   const cellsInReach = Math.min(Math.PI * rc * rc + 4 * rc + 1, spec.width * spec.height);
-  const exactSeconds = KDE_COST_SECONDS.exactVisit * n * cellsInReach * s * s;
+  const exactSeconds =
+    kernel === 'uniform'
+      ? KDE_COST_SECONDS.discRowRun * n * Math.min(2 * rc + 1, spec.height) * s
+      : KDE_COST_SECONDS.exactVisit * n * cellsInReach * s * s;
   const fftSeconds = convolutionSeconds(spec, stencil.radius);
   const binnedSeconds = KDE_COST_SECONDS.binPoint * n + fftSeconds;
   const binnedMeetsBound = kdeBinnedMeetsBound(kernel, bandwidth, spec.cellSize);

@@ -2,6 +2,8 @@ import { throwIfAborted } from '../errors.js';
 import { kernelByName, type Kernel } from '../kernels/kernels.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeContributingPoints } from './kde-contributing.js';
+import { kdePointOrder } from './kde-point-order.js';
+import { discRunsAdd, discRunsResolve } from './kde-exact-disc.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
 import { kdeRowRun } from './kde-row-run.js';
 import { kernelStencil, REACH_SQ_SHRINK, stencilSubOffsets } from './kde-stencil.js';
@@ -57,23 +59,32 @@ export function kdeExact(
   const values = new Float64Array(width * height);
   const contributors = options.countContributors ? new Uint32Array(width * height) : undefined;
 
+  // The uniform disc is summed by row runs (kde-exact-disc.ts): rows, not cells, per point.
+  const disc = kernel.name === 'uniform';
+  const diff = disc ? new Float64Array((width + 1) * height) : undefined;
+  const countDiff = disc ? new Int32Array((width + 1) * height) : undefined;
+  const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
   const visitsPerPoint = (h: number): number => {
     const side = (2 * kernel.reach * h) / cellSize + 2;
-    return side * side * s * s;
+    return disc ? side * s : side * side * s * s;
   };
+  const order = kdePointOrder(points, spec);
   let i = 0;
   while (i < n) {
     throwIfAborted(signal);
     const budget = Math.max(1, Math.floor(VISITS_PER_CHUNK / visitsPerPoint(bandwidth)));
     const end = Math.min(n, i + budget);
-    if (s === 1) {
-      sumCentres(points, i, end, spec, kernel, bandwidth, bandwidths, values, contributors);
+    if (diff && countDiff) {
+      discRunsAdd(points, order, i, end, spec, kernel.valueSq(0), reach2, bandwidth, bandwidths, s, diff, countDiff);
+    } else if (s === 1) {
+      sumCentres(points, order, i, end, spec, kernel, bandwidth, bandwidths, values, contributors);
     } else {
-      sumCellMeans(points, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors, s);
+      sumCellMeans(points, order, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors, s);
     }
     i = end;
     onProgress?.(i / n);
   }
+  if (diff && countDiff) discRunsResolve(diff, countDiff, width, height, values, contributors);
   // Cells outside the study area are summed like the others (a branch in the hot loop costs more
   // than the wasted cells) and cleared here.
   if (mask) {
@@ -100,6 +111,7 @@ export function kdeExact(
  */
 function sumCentres(
   points: PlanarPoints,
+  order: Uint32Array,
   from: number,
   to: number,
   spec: GridSpec,
@@ -118,7 +130,8 @@ function sumCentres(
   const c0 = kernel.valueSq(0);
   const colFactor = gaussian ? new Float64Array(width) : undefined;
   const run = new Int32Array(2);
-  for (let k = from; k < to; k++) {
+  for (let o = from; o < to; o++) {
+    const k = order[o];
     const wk = w[k];
     if (wk === 0) continue;
     const h = bandwidths ? bandwidths[k] : bandwidth;
@@ -190,6 +203,7 @@ const POLY_POWER: Partial<Record<string, number>> = { uniform: 0, epanechnikov: 
 
 function sumCellMeans(
   points: PlanarPoints,
+  order: Uint32Array,
   from: number,
   to: number,
   spec: GridSpec,
@@ -205,7 +219,8 @@ function sumCellMeans(
   const { originX, originY, cellSize, width, height } = spec;
   const sub = stencilSubOffsets(s);
   const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
-  for (let k = from; k < to; k++) {
+  for (let o = from; o < to; o++) {
+    const k = order[o];
     const wk = w[k];
     if (wk === 0) continue;
     const h = bandwidths ? bandwidths[k] : bandwidth;
