@@ -33,11 +33,12 @@ describe('densityMethodCost', () => {
     expect(densityMethodCost(1e5, big, 'quartic', 2500, { edgeCorrection: true }).seconds).toBeGreaterThan(plain.seconds);
   });
 
-  it('prices the uniform disc by row runs, far below a cell-by-cell sum', () => {
+  it('prices the uniform disc by row runs, below a cell-by-cell sum', () => {
     const uniform = densityMethodCost(1e5, big, 'uniform', 2500);
     const quartic = densityMethodCost(1e5, big, 'quartic', 2500);
     expect(uniform.method).toBe('exact');
-    expect(uniform.exactSeconds).toBeLessThan(quartic.exactSeconds / 5);
+    // Measured [D]: 0.88 s (uniform, 2 × 2 cell means) against ≈ 2.5 s (quartic) for 10⁵ points.
+    expect(uniform.exactSeconds).toBeLessThan(quartic.exactSeconds / 2);
   });
 
   it('grows with the number of points and with the kernel area', () => {
