@@ -23,6 +23,8 @@ export interface BenchCase {
 /** What a child reports. */
 export interface BenchCaseResult {
   seconds: number;
+  /** User + system CPU time of the computation: less sensitive to other load than wall time. */
+  cpuSeconds: number;
   /** Peak resident set of the whole process, MB. */
   peakRssMb: number;
   /** Peak RSS growth during the computation itself (over the peak after generating the points), MB. */
@@ -54,12 +56,14 @@ function run(c: BenchCase): BenchCaseResult {
   const extent = { minX: 0, minY: 0, maxX: c.side * c.cellSize, maxY: c.side * c.cellSize };
   const points = benchPoints(c.n, extent);
   const rssBefore = process.resourceUsage().maxRSS;
+  const cpu0 = process.cpuUsage();
   const t0 = process.hrtime.bigint();
   const { values } =
     c.method === 'binned'
       ? kdeBinned(points, spec, c.kernel, c.bandwidth)
       : kdeExact(points, spec, c.kernel, c.bandwidth, { oversample: 1 });
   const seconds = Number(process.hrtime.bigint() - t0) / 1e9;
+  const cpu = process.cpuUsage(cpu0);
   const rssAfter = process.resourceUsage().maxRSS;
   let maxCell = 0;
   for (let k = 1; k < values.length; k++) if (values[k] > values[maxCell]) maxCell = k;
@@ -67,6 +71,7 @@ function run(c: BenchCase): BenchCaseResult {
   const samples = c.samples ?? samplesPick(values, maxCell, values[maxCell]);
   return {
     seconds,
+    cpuSeconds: (cpu.user + cpu.system) / 1e6,
     peakRssMb: rssAfter / 1024,
     computeRssMb: (rssAfter - rssBefore) / 1024,
     max,

@@ -11,6 +11,8 @@ export interface PeerResult {
   id: string;
   label: string;
   seconds: number;
+  /** CPU seconds (user + system), extrapolated like `seconds` where that is. */
+  cpuSeconds: number;
   extrapolated: boolean;
   note: string;
   /** Intensity per km² at the first query cells (for a cross-check), when the peer returns them. */
@@ -73,11 +75,12 @@ export function pythonPeersRun(
     .trim()
     .split('\n')
     .map((line) => {
-      const r = JSON.parse(line) as { id: string; label: string; fitSeconds: number; evalSeconds: number; queries: number; extrapolatedSeconds: number; values: number[] };
+      const r = JSON.parse(line) as { id: string; label: string; fitSeconds: number; evalSeconds: number; queries: number; extrapolatedSeconds: number; extrapolatedCpuSeconds: number; values: number[] };
       return {
         id: r.id,
         label: r.label,
         seconds: r.extrapolatedSeconds,
+        cpuSeconds: r.extrapolatedCpuSeconds,
         extrapolated: true,
         note: `measured ${r.evalSeconds.toFixed(2)} s for ${r.queries.toLocaleString('en-US')} cells (+ ${r.fitSeconds.toFixed(2)} s fit), scaled ×${(fullCells / r.queries).toFixed(0)}`,
         values: r.values,
@@ -98,6 +101,6 @@ export function kernsmoothRun(
   const args = [join(HERE, 'peer-kernsmooth.R'), pointsPath, String(n), String(sd), String(side), String(side), String(lo), String(lo), String(hi), String(hi)];
   const out = spawnSync('Rscript', args, { encoding: 'utf8' });
   if (out.status !== 0) throw new Error(`Rscript peer failed: ${out.stderr}`);
-  const r = JSON.parse(out.stdout.trim()) as { label: string; seconds: number };
-  return { id: 'kernsmooth', label: r.label, seconds: r.seconds, extrapolated: false, note: 'full grid, fastest of 3 (weights ignored: bkde2D has none)' };
+  const r = JSON.parse(out.stdout.trim()) as { label: string; seconds: number; cpuSeconds: number };
+  return { id: 'kernsmooth', label: r.label, seconds: r.seconds, cpuSeconds: r.cpuSeconds, extrapolated: false, note: 'full grid, fastest of 3 (weights ignored: bkde2D has none)' };
 }

@@ -14,11 +14,13 @@ raw <- readBin(con, "double", n = 3 * n, size = 8, endian = "little")
 close(con)
 xy <- cbind(raw[1:n], raw[(n + 1):(2 * n)])
 best <- Inf
+best_cpu <- Inf
 for (k in 1:3) {
   t <- system.time(est <- bkde2D(xy, bandwidth = c(h, h), gridsize = c(gw, gh),
                                  range.x = list(c(ext[1], ext[3]), c(ext[2], ext[4]))))
+  if (t[["elapsed"]] < best) best_cpu <- t[["user.self"]] + t[["sys.self"]]
   best <- min(best, t[["elapsed"]])
 }
-cat(sprintf('{"label":"R %s KernSmooth %s bkde2D (Gaussian, unweighted)","seconds":%.6f,"max":%.10g}\n',
+cat(sprintf('{"label":"R %s KernSmooth %s bkde2D (Gaussian, unweighted)","seconds":%.6f,"cpuSeconds":%.6f,"max":%.10g}\n',
             paste(R.version$major, R.version$minor, sep = "."), packageVersion("KernSmooth"),
-            best, max(est$fhat) * n * 1e6))
+            best, best_cpu, max(est$fhat) * n * 1e6))

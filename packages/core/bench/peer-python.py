@@ -31,21 +31,25 @@ def run_sklearn(task, x, y, w, qx, qy):
     import sklearn
     from sklearn.neighbors import KernelDensity
 
+    c0 = time.process_time()
     t0 = time.perf_counter()
     kde = KernelDensity(kernel=task["kernel"], bandwidth=task["bandwidth"], algorithm="kd_tree", rtol=task.get("rtol", 0))
     kde.fit(np.column_stack([x, y]), sample_weight=w)
     fit = time.perf_counter() - t0
     t1 = time.perf_counter()
+    c1 = time.process_time()
     with np.errstate(divide="ignore"):
         f = np.exp(kde.score_samples(np.column_stack([qx, qy])))
     evaluate = time.perf_counter() - t1
-    return f"sklearn {sklearn.__version__} KernelDensity kd_tree {task['kernel']} rtol={task.get('rtol', 0)}", fit, evaluate, f * w.sum() * 1e6
+    cpu = (c1 - c0, time.process_time() - c1)
+    return cpu, f"sklearn {sklearn.__version__} KernelDensity kd_tree {task['kernel']} rtol={task.get('rtol', 0)}", fit, evaluate, f * w.sum() * 1e6
 
 
 def run_scipy(task, x, y, w, qx, qy):
     import scipy
     from scipy import stats
 
+    c0 = time.process_time()
     t0 = time.perf_counter()
     data = np.vstack([x, y])
     kde = stats.gaussian_kde(data, weights=w)
@@ -54,9 +58,11 @@ def run_scipy(task, x, y, w, qx, qy):
     kde.set_bandwidth(bw_method=task["bandwidth"] / pooled)
     fit = time.perf_counter() - t0
     t1 = time.perf_counter()
+    c1 = time.process_time()
     f = kde.evaluate(np.vstack([qx, qy]))
     evaluate = time.perf_counter() - t1
-    return f"scipy {scipy.__version__} gaussian_kde (kernel covariance = data covariance x factor^2)", fit, evaluate, f * w.sum() * 1e6
+    cpu = (c1 - c0, time.process_time() - c1)
+    return cpu, f"scipy {scipy.__version__} gaussian_kde (kernel covariance = data covariance x factor^2)", fit, evaluate, f * w.sum() * 1e6
 
 
 def main():
@@ -66,7 +72,7 @@ def main():
     for task in spec["tasks"]:
         k = min(task["queries"], qx.size)
         runner = run_sklearn if task["lib"] == "sklearn" else run_scipy
-        label, fit, evaluate, values = runner(task, x, y, w, qx[:k], qy[:k])
+        cpu, label, fit, evaluate, values = runner(task, x, y, w, qx[:k], qy[:k])
         print(
             json.dumps(
                 {
@@ -76,6 +82,7 @@ def main():
                     "evalSeconds": evaluate,
                     "queries": k,
                     "extrapolatedSeconds": fit + evaluate * spec["fullCells"] / k,
+                    "extrapolatedCpuSeconds": cpu[0] + cpu[1] * spec["fullCells"] / k,
                     "values": values.tolist(),
                 }
             ),

@@ -76,7 +76,7 @@ function exactVisits(n: number, kernel: KernelName, h: number, cellSize: number)
 
 const rows: string[][] = [];
 let visitsPerSecond = 0;
-const headline: Record<string, number> = {};
+const headline: Record<string, { wall: number; cpu: number }> = {};
 let headlinePoints: PlanarPoints | undefined;
 const started = Date.now();
 
@@ -88,33 +88,34 @@ for (const n of NS) {
     for (const [kernel, h] of KERNELS) {
       const base = { n, side, cellSize, kernel, bandwidth: h };
       const runs = Array.from({ length: BINNED_REPEATS }, () => caseRun({ ...base, method: 'binned' }));
-      const binned = runs.reduce((best, r) => (r.seconds < best.seconds ? r : best));
+      const binned = { ...runs.reduce((best, r) => (r.seconds < best.seconds ? r : best)), cpuSeconds: Math.min(...runs.map((r) => r.cpuSeconds)) };
       const [qx, qy] = cellCentres(binned.samples, side, cellSize);
       const truth = kdeExactAt(points, qx, qy, kernel, h);
       const err = maxRelError(binned.values, truth);
       const label = [benchCount(n), `${side}²`, `${cellSize} m`, kernel, `${h} m`];
-      rows.push([...label, 'binned', benchSeconds(binned.seconds), binned.peakRssMb.toFixed(0), binned.computeRssMb.toFixed(0), err.toExponential(1)]);
-      if (n === NS[NS.length - 1] && side === SIDES[SIDES.length - 1]) headline[kernel] = binned.seconds;
+      rows.push([...label, 'binned', benchSeconds(binned.seconds), benchSeconds(binned.cpuSeconds), binned.peakRssMb.toFixed(0), binned.computeRssMb.toFixed(0), err.toExponential(1)]);
+      if (n === NS[NS.length - 1] && side === SIDES[SIDES.length - 1]) headline[kernel] = { wall: binned.seconds, cpu: binned.cpuSeconds };
       const visits = exactVisits(n, kernel, h, cellSize);
       const estimate = visitsPerSecond > 0 ? visits / visitsPerSecond : 0;
       if (estimate > EXACT_BUDGET_S) {
-        rows.push([...label, 'exact', `not run (≈ ${benchSeconds(estimate)} est.)`, '–', '–', '–']);
+        rows.push([...label, 'exact', `not run (≈ ${benchSeconds(estimate)} est.)`, '–', '–', '–', '–']);
         continue;
       }
       const exact = caseRun({ ...base, method: 'exact', samples: binned.samples });
-      visitsPerSecond = Math.max(visitsPerSecond, visits / exact.seconds);
-      rows.push([...label, 'exact', benchSeconds(exact.seconds), exact.peakRssMb.toFixed(0), exact.computeRssMb.toFixed(0), maxRelError(exact.values, truth).toExponential(1)]);
+      visitsPerSecond = Math.max(visitsPerSecond, visits / exact.cpuSeconds);
+      rows.push([...label, 'exact', benchSeconds(exact.seconds), benchSeconds(exact.cpuSeconds), exact.peakRssMb.toFixed(0), exact.computeRssMb.toFixed(0), maxRelError(exact.values, truth).toExponential(1)]);
     }
   }
 }
 
-const header = ['N', 'grid', 'cell', 'kernel', 'h', 'method', 'time', 'peak RSS MB', 'compute RSS MB', 'max err / max'];
+const header = ['N', 'grid', 'cell', 'kernel', 'h', 'method', 'wall', 'CPU', 'peak RSS MB', 'compute RSS MB', 'max err / max'];
 process.stdout.write(`\n## Density engine: exact vs binned (${cpus().length} cores, Node ${process.version}, ${new Date().toISOString().slice(0, 10)})\n\n`);
 process.stdout.write(`${benchTable(header, rows)}\n\n`);
 process.stdout.write(
   `h = quartic radius / Gaussian sd (canonically equivalent). Binned time = fastest of ${BINNED_REPEATS} runs; exact runs once.\n` +
     'max err / max = max |value − direct sum| / max(direct sum) over ~300 sampled cells.\n' +
-    'compute RSS = growth of the process peak during the computation. Rows marked "not run" are estimated from the fastest measured exact rate.\n',
+    'compute RSS = growth of the process peak during the computation. Rows marked "not run" are estimated from the fastest measured exact rate (CPU time).\n' +
+    'CPU = user + system time of the computation: on a shared machine it is the steadier figure.\n',
 );
 
 // Peers on the headline data set (largest N, largest grid), same points, same run.
@@ -158,18 +159,38 @@ try {
   };
   const peerRows = peers.map((p) => {
     const ours = headline[p.id] ?? headline.gaussian;
-    const ratio = (t: number): string => `${(p.seconds / t).toFixed(1)}×`;
-    return [p.label, p.extrapolated ? `≈ ${benchSeconds(p.seconds)}` : benchSeconds(p.seconds), p.extrapolated ? 'extrapolated' : 'measured', ratio(ours), ratio(headline.quartic), check(p), p.note];
+    const approx = p.extrapolated ? '≈ ' : '';
+    return [
+      p.label,
+      `${approx}${benchSeconds(p.seconds)}`,
+      `${approx}${benchSeconds(p.cpuSeconds)}`,
+      p.extrapolated ? 'extrapolated' : 'measured',
+      `${(p.seconds / ours.wall).toFixed(1)}×`,
+      `${(p.cpuSeconds / ours.cpu).toFixed(1)}×`,
+      `${(p.cpuSeconds / headline.quartic.cpu).toFixed(1)}×`,
+      check(p),
+      p.note,
+    ];
   });
   peerRows.unshift(
-    ...Object.entries(headline).map(([k, s]) => [`Demandscape binned (${k})`, benchSeconds(s), 'measured', '1.0×', `${(s / headline.quartic).toFixed(1)}×`, '–', `full grid, fastest of ${BINNED_REPEATS}`]),
+    ...Object.entries(headline).map(([k, t]) => [
+      `Demandscape binned (${k})`,
+      benchSeconds(t.wall),
+      benchSeconds(t.cpu),
+      'measured',
+      '1.0×',
+      '1.0×',
+      `${(t.cpu / headline.quartic.cpu).toFixed(1)}×`,
+      '–',
+      `full grid, fastest of ${BINNED_REPEATS}`,
+    ]),
   );
   process.stdout.write(`\n## Peers: ${benchCount(nMax)} weighted points, ${side}² grid, ${cellSize} m cells (same points, same run)\n\n`);
   process.stdout.write(
-    `${benchTable(['implementation', 'time (full grid)', 'how', 'vs ours, same kernel', 'vs ours, quartic', 'max diff / max (vs our direct sum)', 'note'], peerRows)}\n\n`,
+    `${benchTable(['implementation', 'wall (full grid)', 'CPU (full grid)', 'how', 'wall ÷ ours', 'CPU ÷ ours', 'CPU ÷ ours (quartic)', 'max diff / max (vs our direct sum)', 'note'], peerRows)}\n\n`,
   );
   process.stdout.write(
-    `"vs ours, same kernel" divides by our binned time for the matching kernel (quartic for sklearn epanechnikov, its nearest compact kernel; Gaussian otherwise); "vs ours, quartic" by the headline quartic run. Peer bandwidths: radius ${QUARTIC_RADIUS} m, sd ${GAUSSIAN_SD} m.\n`,
+    `"÷ ours" divides by our binned time for the matching kernel (quartic for sklearn epanechnikov, its nearest compact kernel; Gaussian otherwise); "(quartic)" by the headline quartic run. Peer bandwidths: radius ${QUARTIC_RADIUS} m, sd ${GAUSSIAN_SD} m.\n`,
   );
 } finally {
   rmSync(dir, { recursive: true, force: true });
