@@ -19,6 +19,13 @@ describe('gridFromExtent', () => {
   it('does not add a column when the extent ends exactly on a cell edge', () => {
     expect(gridFromExtent({ minX: 0, minY: 0, maxX: 0.3, maxY: 0.3 }, 0.1)).toMatchObject({ width: 3, height: 3 });
   });
+  it('always contains the extent, whatever the round-off', () => {
+    for (const [minX, maxX, c] of [[19.99999999999, 60.00000000001, 20], [-0.30000000000000004, 0.7, 0.1], [1e6 + 0.1, 1e6 + 0.7, 0.1]]) {
+      const g = gridFromExtent({ minX, minY: minX, maxX, maxY: maxX }, c);
+      expect(g.originX).toBeLessThanOrEqual(minX);
+      expect(g.originX + g.width * g.cellSize).toBeGreaterThanOrEqual(maxX);
+    }
+  });
   it('keeps the extent origin without alignment', () => {
     expect(gridFromExtent({ minX: 10, minY: 3, maxX: 95, maxY: 40 }, 20, { align: false })).toEqual({ originX: 10, originY: 3, cellSize: 20, width: 5, height: 2 });
   });

@@ -30,10 +30,15 @@ export function gridSnap(extent: Extent, cellSize: number, align: boolean): Grid
   const c = cellSize;
   // A relative 1e-9 slack stops round-off from adding a whole column at exact multiples.
   const eps = 1e-9;
-  const originX = align ? Math.floor(extent.minX / c + eps) * c : extent.minX;
-  const originY = align ? Math.floor(extent.minY / c + eps) * c : extent.minY;
-  const width = Math.max(1, Math.ceil((extent.maxX - originX) / c - eps));
-  const height = Math.max(1, Math.ceil((extent.maxY - originY) / c - eps));
+  let originX = align ? Math.floor(extent.minX / c + eps) * c : extent.minX;
+  let originY = align ? Math.floor(extent.minY / c + eps) * c : extent.minY;
+  // The slack must never leave the extent's minimum outside the grid.
+  if (originX > extent.minX) originX -= c;
+  if (originY > extent.minY) originY -= c;
+  let width = Math.max(1, Math.ceil((extent.maxX - originX) / c - eps));
+  let height = Math.max(1, Math.ceil((extent.maxY - originY) / c - eps));
+  if (originX + width * c < extent.maxX) width++;
+  if (originY + height * c < extent.maxY) height++;
   return { originX, originY, cellSize: c, width, height };
 }
 
