@@ -20,7 +20,7 @@ export type AppShellProps = { me: Me; orgId: string | null; children: ReactNode 
 export function AppShell({ me, orgId, children }: AppShellProps) {
   const navigate = useNavigate();
   const navigation = useNavigation();
-  const signOut = useSignOut({ onSuccess: () => navigate(paths.auth.signIn.getHref()) });
+  const signOut = useSignOut({ onSuccess: () => navigate(paths.auth.signIn.getHref(), { replace: true }) });
   const membership = me.memberships.find((m) => m.organization.id === orgId);
 
   return (

@@ -1,4 +1,5 @@
 import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { createMe, createOrganization, createWorkspace } from '../../../testing/data-generators';
@@ -68,6 +69,28 @@ describe('the signed-in shell', () => {
     signedInAs('owner');
     renderApp('/orgs/org_someone_else/workspaces');
     expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
+  });
+
+  it('signs out to a plain sign-in page', async () => {
+    signedInAs('owner');
+    let signedOut = false;
+    server.use(
+      http.post('*/api/auth/sign-out', () => {
+        signedOut = true;
+        return new HttpResponse(null, { status: 204 });
+      }),
+      http.get('*/api/me', () =>
+        signedOut
+          ? HttpResponse.json({ error: { code: 'UNAUTHENTICATED', message: 'Sign in.' } }, { status: 401 })
+          : HttpResponse.json(createMe([createOrganization({ id: 'org_1', role: 'owner' })])),
+      ),
+    );
+    const { router } = renderApp('/orgs/org_1/workspaces');
+    await userEvent.click(await screen.findByRole('button', { name: 'Sign out' }));
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe('');
+    expect(signedOut).toBe(true);
   });
 
   it('shows the not-found page for an unknown address', async () => {

@@ -3,6 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Navigate, Outlet, redirect, useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getMeQueryOptions, useMe } from '../../../features/auth/api/get-me';
+import { signedOutHere } from '../../../features/auth/api/sign-out';
 import { lastOrganizationId } from '../../../lib/last-organization';
 import { AppShell } from '../../layouts/app-shell';
 
@@ -29,8 +30,11 @@ export default function AppRoot() {
   const location = useLocation();
   const { orgId } = useParams();
 
-  // The session can end while the page is open (sign-out in another tab, expiry): go to sign-in.
-  if (me.data === null) return <Navigate to={paths.auth.signIn.getHref(location.pathname + location.search)} replace />;
+  if (me.data === null) {
+    // Signed out here: a plain sign-in page. Session ended otherwise (expiry, another tab): come back after.
+    const returnTo = signedOutHere() ? null : location.pathname + location.search;
+    return <Navigate to={paths.auth.signIn.getHref(returnTo)} replace />;
+  }
   if (!me.data) return <Spinner size="lg" label="Loading your session" className="flex min-h-dvh items-center justify-center" />;
 
   const shellOrgId = orgId ?? lastOrganizationId() ?? me.data.memberships[0]?.organization.id ?? null;

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api, resetCsrfToken } from '../../../lib/api-client';
 import type { MutationConfig } from '../../../lib/react-query';
+import { signedOutHereReset } from './sign-out';
 import type { User } from '../../../types/api';
 
 export const signInInputSchema = z.object({
@@ -35,8 +36,9 @@ export function useSignIn(config: MutationConfig<SignInInput, { user: User }> = 
     mutationFn: signIn,
     onSuccess: async (...args) => {
       resetCsrfToken();
+      signedOutHereReset();
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'me' });
-      await queryClient.invalidateQueries({ queryKey: ['me'] });
+      await queryClient.invalidateQueries({ queryKey: ['me'], refetchType: 'all' });
       await config.onSuccess?.(...args);
     },
   });

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api, resetCsrfToken } from '../../../lib/api-client';
 import type { MutationConfig } from '../../../lib/react-query';
+import { signedOutHereReset } from './sign-out';
 import type { User } from '../../../types/api';
 
 export const PASSWORD_MIN_LENGTH = 10;
@@ -44,7 +45,8 @@ export function useSignUp(config: MutationConfig<SignUpInput, { user: User }> = 
     mutationFn: signUp,
     onSuccess: async (...args) => {
       resetCsrfToken();
-      await queryClient.invalidateQueries({ queryKey: ['me'] });
+      signedOutHereReset();
+      await queryClient.invalidateQueries({ queryKey: ['me'], refetchType: 'all' });
       await config.onSuccess?.(...args);
     },
   });

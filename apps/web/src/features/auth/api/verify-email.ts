@@ -25,7 +25,7 @@ export function useVerifyEmail(config: MutationConfig<string, void> = {}) {
     ...config,
     mutationFn: verifyEmail,
     onSuccess: async (...args) => {
-      await queryClient.invalidateQueries({ queryKey: ['me'] });
+      await queryClient.invalidateQueries({ queryKey: ['me'], refetchType: 'all' });
       await config.onSuccess?.(...args);
     },
   });

@@ -35,7 +35,7 @@ export function useCreateOrganization(config: MutationConfig<CreateOrganizationI
     onSuccess: async (...args) => {
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: ['organizations'] }),
-        queryClient.invalidateQueries({ queryKey: ['me'] }),
+        queryClient.invalidateQueries({ queryKey: ['me'], refetchType: 'all' }),
       ]);
       await config.onSuccess?.(...args);
     },
