@@ -74,19 +74,28 @@ describe('densitySurface', () => {
   it('auto: binned for many points with a smooth kernel on fine cells, exact for Epanechnikov', () => {
     const rng = randomSeeded(3);
     const n = 20_000;
-    const p: PlanarPoints = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n).fill(1) };
+    const p: PlanarPoints = {
+      x: new Float64Array(n),
+      y: new Float64Array(n),
+      w: new Float64Array(n).fill(1),
+    };
     for (let k = 0; k < n; k++) {
       p.x[k] = 2000 * rng.normal();
       p.y[k] = 2000 * rng.normal();
     }
     const spec = centred(200, 50);
     expect(densitySurface(p, spec, { kernel: 'quartic', bandwidth: 2000 }).method).toBe('binned');
-    expect(densitySurface(p, spec, { kernel: 'epanechnikov', bandwidth: 2000 }).method).toBe('exact');
+    expect(densitySurface(p, spec, { kernel: 'epanechnikov', bandwidth: 2000 }).method).toBe(
+      'exact',
+    );
   });
 
   it('a single point gives a surface that peaks on it', () => {
     const spec: GridSpec = { originX: 500, originY: 700, cellSize: 20, width: 60, height: 50 };
-    const s = densitySurface(points([1234], [1456], [3]), spec, { kernel: 'triweight', bandwidth: 300 });
+    const s = densitySurface(points([1234], [1456], [3]), spec, {
+      kernel: 'triweight',
+      bandwidth: 300,
+    });
     expect([s.stats.maxCell.i, s.stats.maxCell.j]).toEqual([36, 37]);
   });
 
@@ -108,7 +117,11 @@ describe('densitySurface', () => {
 
   it('adaptive: returns per-point bandwidths and runs the exact sum', () => {
     const p = points([0, 30, -40, 2000], [0, 10, 25, -1500], [1, 1, 1, 1]);
-    const s = densitySurface(p, centred(161, 40), { kernel: 'quartic', bandwidth: 800, adaptive: { pilotBandwidth: 900 } });
+    const s = densitySurface(p, centred(161, 40), {
+      kernel: 'quartic',
+      bandwidth: 800,
+      adaptive: { pilotBandwidth: 900 },
+    });
     expect(s.method).toBe('exact');
     expect(s.bandwidths).toHaveLength(4);
     expect(s.bandwidths![3]).toBeGreaterThan(s.bandwidths![0]);
@@ -129,7 +142,12 @@ describe('densitySurface', () => {
       }
     }
     const p = points(x, y, new Array(x.length).fill(1));
-    const opts: DensitySurfaceOptions = { kernel: 'quartic', bandwidth: 200, mask, method: 'binned' };
+    const opts: DensitySurfaceOptions = {
+      kernel: 'quartic',
+      bandwidth: 200,
+      mask,
+      method: 'binned',
+    };
     const raw = densitySurface(p, spec, opts);
     const corrected = densitySurface(p, spec, { ...opts, edgeCorrection: true });
     const rho = 1e6 / (25 * 25); // customers per km²
@@ -143,28 +161,146 @@ describe('densitySurface', () => {
   it('stops with code ABORTED when the signal has fired', () => {
     const ctl = new AbortController();
     ctl.abort();
-    expect(thrown(() => densitySurface(one, centred(11, 50), { kernel: 'quartic', bandwidth: 300, signal: ctl.signal })).code).toBe('ABORTED');
+    expect(
+      thrown(() =>
+        densitySurface(one, centred(11, 50), {
+          kernel: 'quartic',
+          bandwidth: 300,
+          signal: ctl.signal,
+        }),
+      ).code,
+    ).toBe('ABORTED');
   });
 
   describe('rejects bad input with a specific code and a message that says what to change', () => {
     const spec = centred(11, 50);
     const cases: Array<[string, CoreErrorCode, () => unknown, RegExp]> = [
-      ['no points', 'EMPTY_POINTS', () => densitySurface(points([], [], []), spec, { kernel: 'quartic', bandwidth: 300 }), /no customer locations/],
-      ['NaN x', 'INVALID_COORDINATE', () => densitySurface(points([0, NaN], [0, 0], [1, 1]), spec, { kernel: 'quartic', bandwidth: 300 }), /point 1 has x = NaN/],
-      ['infinite y', 'INVALID_COORDINATE', () => densitySurface(points([0], [Infinity], [1]), spec, { kernel: 'quartic', bandwidth: 300 }), /point 0 has y = Infinity/],
-      ['negative weight', 'INVALID_WEIGHT', () => densitySurface(points([0, 1], [0, 1], [1, -2]), spec, { kernel: 'quartic', bandwidth: 300 }), /point 1 has weight -2/],
-      ['NaN weight', 'INVALID_WEIGHT', () => densitySurface(points([0], [0], [NaN]), spec, { kernel: 'quartic', bandwidth: 300 }), /weight NaN/],
-      ['zero total weight', 'ZERO_TOTAL_WEIGHT', () => densitySurface(points([0, 1], [0, 1], [0, 0]), spec, { kernel: 'quartic', bandwidth: 300 }), /add up to 0/],
-      ['negative bandwidth', 'INVALID_BANDWIDTH', () => densitySurface(points([0, 900], [0, 400], [1, 1]), spec, { kernel: 'quartic', bandwidth: -3 }), /bandwidth must be a positive number of metres \(got -3\); try the suggested \d+ m/],
-      ['NaN bandwidth', 'INVALID_BANDWIDTH', () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: NaN }), /got NaN/],
-      ['bad pilot', 'INVALID_BANDWIDTH', () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, adaptive: { pilotBandwidth: 0 } }), /pilot bandwidth/],
-      ['zero cell size', 'INVALID_CELL_SIZE', () => densitySurface(one, { ...spec, cellSize: 0 }, { kernel: 'quartic', bandwidth: 300 }), /cell size must be a positive number of metres \(got 0\); for a bandwidth of 300 m try 9 m/],
-      ['mask length', 'INVALID_ARGUMENT', () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, mask: new Uint8Array(5) }), /11 × 11 = 121 \(got 5\)/],
-      ['empty mask', 'INVALID_ARGUMENT', () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, mask: new Uint8Array(121) }), /no cell inside/],
-      ['unknown kernel', 'INVALID_ARGUMENT', () => densitySurface(one, spec, { kernel: 'box' as never, bandwidth: 300 }), /kernel must be one of/],
-      ['unknown method', 'INVALID_ARGUMENT', () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, method: 'fast' as never }), /method must be exact, binned or auto/],
-      ['ragged arrays', 'INVALID_ARGUMENT', () => densitySurface(points([0, 1], [0], [1, 1]), spec, { kernel: 'quartic', bandwidth: 300 }), /same length/],
-      ['zero width', 'INVALID_ARGUMENT', () => densitySurface(one, { ...spec, width: 0 }, { kernel: 'quartic', bandwidth: 300 }), /width must be a whole number/],
+      [
+        'no points',
+        'EMPTY_POINTS',
+        () => densitySurface(points([], [], []), spec, { kernel: 'quartic', bandwidth: 300 }),
+        /no customer locations/,
+      ],
+      [
+        'NaN x',
+        'INVALID_COORDINATE',
+        () =>
+          densitySurface(points([0, NaN], [0, 0], [1, 1]), spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+          }),
+        /point 1 has x = NaN/,
+      ],
+      [
+        'infinite y',
+        'INVALID_COORDINATE',
+        () =>
+          densitySurface(points([0], [Infinity], [1]), spec, { kernel: 'quartic', bandwidth: 300 }),
+        /point 0 has y = Infinity/,
+      ],
+      [
+        'negative weight',
+        'INVALID_WEIGHT',
+        () =>
+          densitySurface(points([0, 1], [0, 1], [1, -2]), spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+          }),
+        /point 1 has weight -2/,
+      ],
+      [
+        'NaN weight',
+        'INVALID_WEIGHT',
+        () => densitySurface(points([0], [0], [NaN]), spec, { kernel: 'quartic', bandwidth: 300 }),
+        /weight NaN/,
+      ],
+      [
+        'zero total weight',
+        'ZERO_TOTAL_WEIGHT',
+        () =>
+          densitySurface(points([0, 1], [0, 1], [0, 0]), spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+          }),
+        /add up to 0/,
+      ],
+      [
+        'negative bandwidth',
+        'INVALID_BANDWIDTH',
+        () =>
+          densitySurface(points([0, 900], [0, 400], [1, 1]), spec, {
+            kernel: 'quartic',
+            bandwidth: -3,
+          }),
+        /bandwidth must be a positive number of metres \(got -3\); try the suggested \d+ m/,
+      ],
+      [
+        'NaN bandwidth',
+        'INVALID_BANDWIDTH',
+        () => densitySurface(one, spec, { kernel: 'quartic', bandwidth: NaN }),
+        /got NaN/,
+      ],
+      [
+        'bad pilot',
+        'INVALID_BANDWIDTH',
+        () =>
+          densitySurface(one, spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+            adaptive: { pilotBandwidth: 0 },
+          }),
+        /pilot bandwidth/,
+      ],
+      [
+        'zero cell size',
+        'INVALID_CELL_SIZE',
+        () => densitySurface(one, { ...spec, cellSize: 0 }, { kernel: 'quartic', bandwidth: 300 }),
+        /cell size must be a positive number of metres \(got 0\); for a bandwidth of 300 m try 9 m/,
+      ],
+      [
+        'mask length',
+        'INVALID_ARGUMENT',
+        () =>
+          densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, mask: new Uint8Array(5) }),
+        /11 × 11 = 121 \(got 5\)/,
+      ],
+      [
+        'empty mask',
+        'INVALID_ARGUMENT',
+        () =>
+          densitySurface(one, spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+            mask: new Uint8Array(121),
+          }),
+        /no cell inside/,
+      ],
+      [
+        'unknown kernel',
+        'INVALID_ARGUMENT',
+        () => densitySurface(one, spec, { kernel: 'box' as never, bandwidth: 300 }),
+        /kernel must be one of/,
+      ],
+      [
+        'unknown method',
+        'INVALID_ARGUMENT',
+        () =>
+          densitySurface(one, spec, { kernel: 'quartic', bandwidth: 300, method: 'fast' as never }),
+        /method must be exact, binned or auto/,
+      ],
+      [
+        'ragged arrays',
+        'INVALID_ARGUMENT',
+        () =>
+          densitySurface(points([0, 1], [0], [1, 1]), spec, { kernel: 'quartic', bandwidth: 300 }),
+        /same length/,
+      ],
+      [
+        'zero width',
+        'INVALID_ARGUMENT',
+        () => densitySurface(one, { ...spec, width: 0 }, { kernel: 'quartic', bandwidth: 300 }),
+        /width must be a whole number/,
+      ],
     ];
     for (const [name, code, fn, message] of cases) {
       it(`${name} → ${code}`, () => {
@@ -175,7 +311,14 @@ describe('densitySurface', () => {
     }
 
     it('names the index of the bad row in the details', () => {
-      expect(thrown(() => densitySurface(points([0, 0, 5], [0, 0, NaN], [1, 1, 1]), spec, { kernel: 'quartic', bandwidth: 300 })).details).toEqual({ index: 2 });
+      expect(
+        thrown(() =>
+          densitySurface(points([0, 0, 5], [0, 0, NaN], [1, 1, 1]), spec, {
+            kernel: 'quartic',
+            bandwidth: 300,
+          }),
+        ).details,
+      ).toEqual({ index: 2 });
     });
   });
 });

@@ -78,15 +78,24 @@ export interface DensitySurface {
  * const surface = densitySurface(points, spec, { kernel: 'quartic', bandwidth: 850 });
  * surface.stats.max; // peak customers per km²
  */
-export function densitySurface(points: PlanarPoints, spec: GridSpec, options: DensitySurfaceOptions): DensitySurface {
+export function densitySurface(
+  points: PlanarPoints,
+  spec: GridSpec,
+  options: DensitySurfaceOptions,
+): DensitySurface {
   const { kernel, bandwidth, mask, signal, onProgress } = options;
   const totalWeight = densityInputValidate(points, spec, kernel, bandwidth, mask);
   const requested = options.method ?? 'auto';
   if (requested !== 'auto' && requested !== 'exact' && requested !== 'binned') {
-    throw new CoreError('INVALID_ARGUMENT', `method must be exact, binned or auto (got "${String(requested)}")`, 'method');
+    throw new CoreError(
+      'INVALID_ARGUMENT',
+      `method must be exact, binned or auto (got "${String(requested)}")`,
+      'method',
+    );
   }
   const adaptive = options.adaptive !== undefined && options.adaptive !== false;
-  const pilotBandwidth = typeof options.adaptive === 'object' ? options.adaptive.pilotBandwidth : undefined;
+  const pilotBandwidth =
+    typeof options.adaptive === 'object' ? options.adaptive.pilotBandwidth : undefined;
   if (pilotBandwidth !== undefined && !(pilotBandwidth > 0 && Number.isFinite(pilotBandwidth))) {
     throw new CoreError(
       'INVALID_BANDWIDTH',
@@ -117,11 +126,19 @@ export function densitySurface(points: PlanarPoints, spec: GridSpec, options: De
     result = r;
     bandwidths = r.bandwidths;
   } else {
-    method = requested === 'auto' ? densityMethodCost(points.x.length, spec, kernel, bandwidth).method : requested;
+    method =
+      requested === 'auto'
+        ? densityMethodCost(points.x.length, spec, kernel, bandwidth).method
+        : requested;
     result =
       method === 'binned'
         ? kdeBinned(points, spec, kernel, bandwidth, { mask, signal, onProgress: progress })
-        : kdeExact(points, spec, kernel, bandwidth, { mask, signal, onProgress: progress, countContributors: options.countContributors });
+        : kdeExact(points, spec, kernel, bandwidth, {
+            mask,
+            signal,
+            onProgress: progress,
+            countContributors: options.countContributors,
+          });
     if (method === 'binned' && options.countContributors) {
       result.contributors = kdeContributorCounts(points, spec, kernel, bandwidth, { mask, signal });
     }
@@ -163,7 +180,12 @@ export function densitySurface(points: PlanarPoints, spec: GridSpec, options: De
       contributingPoints: result.contributingPoints,
       integral,
       max,
-      maxCell: { i, j, x: spec.originX + (i + 0.5) * spec.cellSize, y: spec.originY + (j + 0.5) * spec.cellSize },
+      maxCell: {
+        i,
+        j,
+        x: spec.originX + (i + 0.5) * spec.cellSize,
+        y: spec.originY + (j + 0.5) * spec.cellSize,
+      },
       kernel,
       bandwidth,
       cellSize: spec.cellSize,

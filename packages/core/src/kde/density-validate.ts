@@ -3,7 +3,8 @@ import { kernelByName } from '../kernels/kernels.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { KDE_SUGGESTED_CELL_FRACTION } from './kde-cell-rule.js';
 
-const fmt = (v: number): string => (Number.isFinite(v) ? String(Math.round(v * 100) / 100) : String(v));
+const fmt = (v: number): string =>
+  Number.isFinite(v) ? String(Math.round(v * 100) / 100) : String(v);
 
 /**
  * A bandwidth to suggest in error messages: the normal-reference rule h = σ̂·n_eff^(−1/6) per
@@ -29,7 +30,10 @@ function bandwidthHint(points: PlanarPoints, kernel: KernelName): number {
   for (let k = 0; k < x.length; k++) v += w[k] * ((x[k] - mx) ** 2 + (y[k] - my) ** 2);
   const sd = Math.sqrt(v / (2 * sw));
   const nEff = (sw * sw) / sw2;
-  const h = sd * Math.pow(nEff, -1 / 6) * (kernelByName(kernel).canonicalDelta / kernelByName('gaussian').canonicalDelta);
+  const h =
+    sd *
+    Math.pow(nEff, -1 / 6) *
+    (kernelByName(kernel).canonicalDelta / kernelByName('gaussian').canonicalDelta);
   return h > 0 ? h : 1000;
 }
 
@@ -63,7 +67,11 @@ export function densityInputValidate(
     );
   }
   if (x.length === 0) {
-    throw new CoreError('EMPTY_POINTS', 'there are no customer locations to smooth (got 0 points); add a customer file with valid rows', 'points');
+    throw new CoreError(
+      'EMPTY_POINTS',
+      'there are no customer locations to smooth (got 0 points); add a customer file with valid rows',
+      'points',
+    );
   }
   let total = 0;
   for (let k = 0; k < x.length; k++) {
@@ -87,7 +95,11 @@ export function densityInputValidate(
     total += w[k];
   }
   if (!(total > 0)) {
-    throw new CoreError('ZERO_TOTAL_WEIGHT', `the weights of all ${x.length} points add up to 0; give at least one customer a positive weight (e.g. 1 each)`, 'points.w');
+    throw new CoreError(
+      'ZERO_TOTAL_WEIGHT',
+      `the weights of all ${x.length} points add up to 0; give at least one customer a positive weight (e.g. 1 each)`,
+      'points.w',
+    );
   }
   if (!(bandwidth > 0) || !Number.isFinite(bandwidth)) {
     const hint = bandwidthHint(points, kernel);
@@ -110,12 +122,20 @@ export function densityInputValidate(
   for (const key of ['width', 'height'] as const) {
     const v = spec[key];
     if (!Number.isInteger(v) || v < 1) {
-      throw new CoreError('INVALID_ARGUMENT', `grid ${key} must be a whole number of cells ≥ 1 (got ${v})`, key);
+      throw new CoreError(
+        'INVALID_ARGUMENT',
+        `grid ${key} must be a whole number of cells ≥ 1 (got ${v})`,
+        key,
+      );
     }
   }
   for (const key of ['originX', 'originY'] as const) {
     if (!Number.isFinite(spec[key])) {
-      throw new CoreError('INVALID_ARGUMENT', `grid ${key} must be a finite number of metres (got ${spec[key]})`, key);
+      throw new CoreError(
+        'INVALID_ARGUMENT',
+        `grid ${key} must be a finite number of metres (got ${spec[key]})`,
+        key,
+      );
     }
   }
   if (mask) {
@@ -130,7 +150,11 @@ export function densityInputValidate(
     let inside = 0;
     for (let c = 0; c < cells; c++) if (mask[c]) inside++;
     if (inside === 0) {
-      throw new CoreError('INVALID_ARGUMENT', 'the study-area mask has no cell inside it; draw the study area over the customers or leave it out', 'mask');
+      throw new CoreError(
+        'INVALID_ARGUMENT',
+        'the study-area mask has no cell inside it; draw the study area over the customers or leave it out',
+        'mask',
+      );
     }
   }
   return total;

@@ -58,7 +58,8 @@ describe('kdeAdaptiveBandwidths', () => {
 
   it('follows the square-root law: hᵢ·√f̃(xᵢ) is the same for every point', () => {
     const c = res.bandwidths[0] * Math.sqrt(res.pilot[0]);
-    for (let k = 1; k < p.x.length; k += 37) expect(res.bandwidths[k] * Math.sqrt(res.pilot[k])).toBeCloseTo(c, 6);
+    for (let k = 1; k < p.x.length; k += 37)
+      expect(res.bandwidths[k] * Math.sqrt(res.pilot[k])).toBeCloseTo(c, 6);
   });
 
   it('gives narrower kernels in the dense core than in the halo', () => {
@@ -88,7 +89,11 @@ describe('kdeAdaptiveBandwidths', () => {
   it(`clamps the factor to [1/${ADAPTIVE_MAX_FACTOR}, ${ADAPTIVE_MAX_FACTOR}] and gives the widest kernel where the pilot is 0`, () => {
     // 500 coincident points and one loner 5 km away: the loner's pilot is tiny.
     const n = 501;
-    const q: PlanarPoints = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n).fill(1) };
+    const q: PlanarPoints = {
+      x: new Float64Array(n),
+      y: new Float64Array(n),
+      w: new Float64Array(n).fill(1),
+    };
     q.x[500] = 5000;
     const r = kdeAdaptiveBandwidths(q, spec, 'quartic', 300);
     expect(r.bandwidths[500]).toBeCloseTo(300 * ADAPTIVE_MAX_FACTOR, 9);

@@ -52,7 +52,9 @@ export function kdeAdaptiveBandwidths(
   options: KdeAdaptiveOptions = {},
 ): KdeAdaptiveBandwidths {
   const hp = options.pilotBandwidth ?? h0;
-  const method = options.pilotMethod ?? (kdeBinnedMeetsBound(kernelName, hp, spec.cellSize) ? 'binned' : 'exact');
+  const method =
+    options.pilotMethod ??
+    (kdeBinnedMeetsBound(kernelName, hp, spec.cellSize) ? 'binned' : 'exact');
   const grid =
     method === 'binned'
       ? kdeBinned(points, spec, kernelName, hp, { signal: options.signal })

@@ -3,7 +3,11 @@ import { isCoreError } from '../errors.js';
 import { randomSeeded } from '../lib/random-seeded.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeBinned } from './kde-binned.js';
-import { KDE_BINNED_MAX_CELL_FRACTION, KDE_SUGGESTED_CELL_FRACTION, kdeBinnedMeetsBound } from './kde-cell-rule.js';
+import {
+  KDE_BINNED_MAX_CELL_FRACTION,
+  KDE_SUGGESTED_CELL_FRACTION,
+  kdeBinnedMeetsBound,
+} from './kde-cell-rule.js';
 import { kdeExact } from './kde-exact.js';
 
 function points(x: number[], y: number[], w: number[]): PlanarPoints {
@@ -99,7 +103,10 @@ describe('kdeBinned', () => {
       const h = 1000;
       const spec = specFor(kernel, h, KDE_SUGGESTED_CELL_FRACTION[kernel]);
       const p = shapes(h, spec)['single point between centres'];
-      const err = relativeMaxError(kdeExact(p, spec, kernel, h).values, kdeBinned(p, spec, kernel, h).values);
+      const err = relativeMaxError(
+        kdeExact(p, spec, kernel, h).values,
+        kdeBinned(p, spec, kernel, h).values,
+      );
       expect(err).toBeGreaterThan(1e-3);
       expect(kdeBinnedMeetsBound(kernel, h, spec.cellSize)).toBe(false);
     });
@@ -110,9 +117,18 @@ describe('kdeBinned', () => {
       const h = 1000;
       const d = KDE_BINNED_MAX_CELL_FRACTION[kernel] * h;
       const n = Math.ceil((2.2 * h) / d);
-      const spec: GridSpec = { originX: -1.1 * h, originY: -1.1 * h, cellSize: d, width: n, height: n };
+      const spec: GridSpec = {
+        originX: -1.1 * h,
+        originY: -1.1 * h,
+        cellSize: d,
+        width: n,
+        height: n,
+      };
       const p = shapes(h, spec)['single point between centres'];
-      const err = relativeMaxError(kdeExact(p, spec, kernel, h).values, kdeBinned(p, spec, kernel, h).values);
+      const err = relativeMaxError(
+        kdeExact(p, spec, kernel, h).values,
+        kdeBinned(p, spec, kernel, h).values,
+      );
       expect(err).toBeLessThanOrEqual(1e-3);
     });
   }
@@ -122,7 +138,13 @@ describe('kdeBinned', () => {
     // Points up to 400 m outside the west edge are still binned onto the margin; the grid is
     // widened below so it covers their whole support for the integral.
     const p = points([-300, 2500, 4100, 10], [2000, 1990, 3000, 3990], [2, 3, 4, 5]);
-    const wide: GridSpec = { originX: -1200, originY: -1000, cellSize: 25, width: 280, height: 250 };
+    const wide: GridSpec = {
+      originX: -1200,
+      originY: -1000,
+      cellSize: 25,
+      width: 280,
+      height: 250,
+    };
     const res = kdeBinned(p, wide, 'quartic', 800);
     const integral = res.values.reduce((a, v) => a + v, 0) * 25 * 25;
     expect(Math.abs(integral / 14 - 1)).toBeLessThan(1e-3);
@@ -141,7 +163,13 @@ describe('kdeBinned', () => {
       y[k] = 1000 * rng.normal();
     }
     const d = 25; // cell centre (80, 80) sits on μ = (0, 0)
-    const spec: GridSpec = { originX: -80.5 * d, originY: -80.5 * d, cellSize: d, width: 161, height: 161 };
+    const spec: GridSpec = {
+      originX: -80.5 * d,
+      originY: -80.5 * d,
+      cellSize: d,
+      width: 161,
+      height: 161,
+    };
     const { values } = kdeBinned({ x, y, w }, spec, 'gaussian', 500);
     const atMean = (values[80 + 80 * 161] * 1e6) / n;
     // Sampling sd of f̂(μ) ≈ √(f(μ)·R(K)/(n h²)) = 1.4e-3 /km² (≈ 1.1 %); tolerance ≈ 3 sd.

@@ -54,6 +54,10 @@ export const KDE_SUGGESTED_CELL_FRACTION: Record<KernelName, number> = {
  * @example
  * kdeBinnedMeetsBound('quartic', 2500, 50); // true (δ/h = 0.02 ≤ 0.03)
  */
-export function kdeBinnedMeetsBound(kernel: KernelName, bandwidth: number, cellSize: number): boolean {
+export function kdeBinnedMeetsBound(
+  kernel: KernelName,
+  bandwidth: number,
+  cellSize: number,
+): boolean {
   return cellSize / bandwidth <= KDE_BINNED_MAX_CELL_FRACTION[kernel];
 }

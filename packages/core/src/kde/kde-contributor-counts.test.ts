@@ -43,7 +43,12 @@ describe('kdeContributorCounts', () => {
     const mask = new Uint8Array(spec.width * spec.height).fill(1);
     mask.fill(0, 0, 900);
     const p = cloud(500, spec, 4);
-    const exact = kdeExact(p, spec, 'quartic', 300, { countContributors: true, mask }).contributors!;
-    expect(Array.from(kdeContributorCounts(p, spec, 'quartic', 300, { mask }))).toEqual(Array.from(exact));
+    const exact = kdeExact(p, spec, 'quartic', 300, {
+      countContributors: true,
+      mask,
+    }).contributors!;
+    expect(Array.from(kdeContributorCounts(p, spec, 'quartic', 300, { mask }))).toEqual(
+      Array.from(exact),
+    );
   });
 });

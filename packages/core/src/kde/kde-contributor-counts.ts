@@ -44,7 +44,8 @@ export function kdeContributorCounts(
   const { mask, signal } = options;
   const { originX, originY, cellSize, width, height } = spec;
   if (kernelStencil(kernel, bandwidth, cellSize).oversample > 1) {
-    return kdeExact(points, spec, kernelName, bandwidth, { mask, signal, countContributors: true }).contributors!;
+    return kdeExact(points, spec, kernelName, bandwidth, { mask, signal, countContributors: true })
+      .contributors!;
   }
   const { x, y, w } = points;
   const stride = width + 1;

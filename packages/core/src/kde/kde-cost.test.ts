@@ -30,7 +30,9 @@ describe('densityMethodCost', () => {
     const adaptive = densityMethodCost(1e5, big, 'quartic', 2500, { adaptive: true });
     expect(adaptive.method).toBe('exact');
     expect(adaptive.seconds).toBeGreaterThan(plain.exactSeconds);
-    expect(densityMethodCost(1e5, big, 'quartic', 2500, { edgeCorrection: true }).seconds).toBeGreaterThan(plain.seconds);
+    expect(
+      densityMethodCost(1e5, big, 'quartic', 2500, { edgeCorrection: true }).seconds,
+    ).toBeGreaterThan(plain.seconds);
   });
 
   it('prices the uniform disc by row runs, below a cell-by-cell sum', () => {

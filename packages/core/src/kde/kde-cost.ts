@@ -82,7 +82,9 @@ export function densityMethodCost(
   let seconds: number;
   if (options.adaptive) {
     method = 'exact';
-    seconds = Math.min(binnedMeetsBound ? binnedSeconds : Infinity, exactSeconds) + ADAPTIVE_VISIT_FACTOR * exactSeconds;
+    seconds =
+      Math.min(binnedMeetsBound ? binnedSeconds : Infinity, exactSeconds) +
+      ADAPTIVE_VISIT_FACTOR * exactSeconds;
   } else {
     method = binnedMeetsBound && binnedSeconds < exactSeconds ? 'binned' : 'exact';
     seconds = method === 'binned' ? binnedSeconds : exactSeconds;

@@ -6,7 +6,9 @@ import { KDE_EDGE_MIN_FACTOR, kdeEdgeCorrect, kdeEdgeFactor } from './kde-edge.j
 /** Standard normal CDF via the Abramowitz & Stegun 7.1.26 erf approximation (|error| < 1.5e-7) [S]. */
 function phi(z: number): number {
   const t = 1 / (1 + (0.3275911 * Math.abs(z)) / Math.SQRT2);
-  const poly = t * (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
+  const poly =
+    t *
+    (0.254829592 + t * (-0.284496736 + t * (1.421413741 + t * (-1.453152027 + t * 1.061405429))));
   const erf = 1 - poly * Math.exp(-(z * z) / 2);
   return z >= 0 ? 0.5 * (1 + erf) : 0.5 * (1 - erf);
 }
@@ -19,7 +21,8 @@ const spec: GridSpec = { originX: 0, originY: 0, cellSize: D, width: N, height: 
 
 function halfPlaneMask(corner: boolean): Uint8Array {
   const m = new Uint8Array(N * N);
-  for (let j = 0; j < N; j++) for (let i = 0; i < N; i++) m[i + j * N] = i >= EDGE && (!corner || j >= EDGE) ? 1 : 0;
+  for (let j = 0; j < N; j++)
+    for (let i = 0; i < N; i++) m[i + j * N] = i >= EDGE && (!corner || j >= EDGE) ? 1 : 0;
   return m;
 }
 
@@ -74,18 +77,24 @@ describe('kdeEdgeCorrect', () => {
     const mask = halfPlaneMask(false);
     const xs: number[] = [];
     const ys: number[] = [];
-    for (let j = 0; j < N; j += 1) for (let i = EDGE; i < N; i++) {
-      xs.push((i + 0.5) * D);
-      ys.push((j + 0.5) * D);
-    }
-    const p = { x: Float64Array.from(xs), y: Float64Array.from(ys), w: new Float64Array(xs.length).fill(1) };
+    for (let j = 0; j < N; j += 1)
+      for (let i = EDGE; i < N; i++) {
+        xs.push((i + 0.5) * D);
+        ys.push((j + 0.5) * D);
+      }
+    const p = {
+      x: Float64Array.from(xs),
+      y: Float64Array.from(ys),
+      w: new Float64Array(xs.length).fill(1),
+    };
     const raw = kdeBinned(p, spec, 'quartic', 600, { mask }).values;
     const rho = 1 / (D * D);
     expect(raw[EDGE + 150 * N] / rho).toBeLessThan(0.6); // about half at the edge before correction
     const corrected = kdeEdgeCorrect(raw, kdeEdgeFactor(spec, 'quartic', 600, mask), mask);
     // Rows far from the grid's south and north borders (600 m = 12 cells).
     for (let j = 20; j < N - 20; j += 7) {
-      for (let i = EDGE; i < N - 20; i += 3) expect(Math.abs(corrected[i + j * N] / rho - 1)).toBeLessThan(2e-3);
+      for (let i = EDGE; i < N - 20; i += 3)
+        expect(Math.abs(corrected[i + j * N] / rho - 1)).toBeLessThan(2e-3);
       expect(corrected[EDGE - 1 + j * N]).toBe(0);
     }
   });

@@ -8,7 +8,11 @@ const spec: GridSpec = { originX: -400, originY: 300, cellSize: 20, width: 60, h
 
 function cloud(n: number): PlanarPoints {
   const rng = randomSeeded(31);
-  const p: PlanarPoints = { x: new Float64Array(n), y: new Float64Array(n), w: new Float64Array(n) };
+  const p: PlanarPoints = {
+    x: new Float64Array(n),
+    y: new Float64Array(n),
+    w: new Float64Array(n),
+  };
   for (let k = 0; k < n; k++) {
     p.x[k] = -500 + 1400 * rng.uniform();
     p.y[k] = 200 + 1100 * rng.uniform();
@@ -18,7 +22,11 @@ function cloud(n: number): PlanarPoints {
 }
 
 /** Direct definition: mean of the disc kernel w/(πh²)·[r < h] over s × s sub-samples per cell [D]. */
-function bruteForce(p: PlanarPoints, hs: Float64Array, s: number): { values: Float64Array; counts: Uint32Array } {
+function bruteForce(
+  p: PlanarPoints,
+  hs: Float64Array,
+  s: number,
+): { values: Float64Array; counts: Uint32Array } {
   const values = new Float64Array(spec.width * spec.height);
   const counts = new Uint32Array(values.length);
   for (let j = 0; j < spec.height; j++) {
@@ -49,7 +57,11 @@ describe('uniform disc by row runs', () => {
   for (let k = 0; k < hs.length; k++) hs[k] = 90 + (k % 7) * 23;
   for (const s of [1, 3]) {
     it(`equals the direct sum of the disc kernel over ${s}×${s} samples per cell, with per-point bandwidths and counts`, () => {
-      const fast = kdeExact(p, spec, 'uniform', 100, { bandwidths: hs, oversample: s, countContributors: true });
+      const fast = kdeExact(p, spec, 'uniform', 100, {
+        bandwidths: hs,
+        oversample: s,
+        countContributors: true,
+      });
       const ref = bruteForce(p, hs, s);
       let peak = 0;
       for (const v of ref.values) peak = Math.max(peak, v);

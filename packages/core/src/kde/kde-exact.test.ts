@@ -52,7 +52,13 @@ describe('kdeExact', () => {
       const reach = kernelByName(name).reach * h;
       const d = 60;
       const n = Math.ceil((2 * reach + 2000) / d);
-      const spec: GridSpec = { originX: -reach - 1000, originY: -reach - 1000, cellSize: d, width: n, height: n };
+      const spec: GridSpec = {
+        originX: -reach - 1000,
+        originY: -reach - 1000,
+        cellSize: d,
+        width: n,
+        height: n,
+      };
       const x: number[] = [];
       const y: number[] = [];
       const w: number[] = [];
@@ -93,14 +99,17 @@ describe('kdeExact', () => {
   it('counts the distinct points whose kernel reaches each cell', () => {
     const spec = centredGrid(41, 50);
     const p = points([0, 400, 0], [0, 0, 0], [1, 1, 7]);
-    const { values, contributors, contributingPoints } = kdeExact(p, spec, 'quartic', 500, { countContributors: true });
+    const { values, contributors, contributingPoints } = kdeExact(p, spec, 'quartic', 500, {
+      countContributors: true,
+    });
     expect(contributingPoints).toBe(3);
     for (let j = 0; j < 41; j++) {
       for (let i = 0; i < 41; i++) {
         const cx = (i - 20) * 50;
         const cy = (j - 20) * 50;
         let expected = 0;
-        for (let k = 0; k < 3; k++) if ((cx - p.x[k]) ** 2 + (cy - p.y[k]) ** 2 < 500 ** 2) expected++;
+        for (let k = 0; k < 3; k++)
+          if ((cx - p.x[k]) ** 2 + (cy - p.y[k]) ** 2 < 500 ** 2) expected++;
         expect(contributors![i + j * 41]).toBe(expected);
         expect(values[i + j * 41] > 0).toBe(expected > 0);
       }

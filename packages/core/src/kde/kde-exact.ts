@@ -75,11 +75,37 @@ export function kdeExact(
     const budget = Math.max(1, Math.floor(VISITS_PER_CHUNK / visitsPerPoint(bandwidth)));
     const end = Math.min(n, i + budget);
     if (diff && countDiff) {
-      discRunsAdd(points, order, i, end, spec, kernel.valueSq(0), reach2, bandwidth, bandwidths, s, diff, countDiff);
+      discRunsAdd(
+        points,
+        order,
+        i,
+        end,
+        spec,
+        kernel.valueSq(0),
+        reach2,
+        bandwidth,
+        bandwidths,
+        s,
+        diff,
+        countDiff,
+      );
     } else if (s === 1) {
       sumCentres(points, order, i, end, spec, kernel, bandwidth, bandwidths, values, contributors);
     } else {
-      sumCellMeans(points, order, i, end, spec, kernel, bandwidth, bandwidths, mask, values, contributors, s);
+      sumCellMeans(
+        points,
+        order,
+        i,
+        end,
+        spec,
+        kernel,
+        bandwidth,
+        bandwidths,
+        mask,
+        values,
+        contributors,
+        s,
+      );
     }
     i = end;
     onProgress?.(i / n);
@@ -199,7 +225,12 @@ function sumCentres(
 }
 
 /** Power q of the kernels of the form c(1 − r²)^q, evaluated inline in the hot loop. */
-const POLY_POWER: Partial<Record<string, number>> = { uniform: 0, epanechnikov: 1, quartic: 2, triweight: 3 };
+const POLY_POWER: Partial<Record<string, number>> = {
+  uniform: 0,
+  epanechnikov: 1,
+  quartic: 2,
+  triweight: 3,
+};
 
 function sumCellMeans(
   points: PlanarPoints,

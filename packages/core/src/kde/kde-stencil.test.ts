@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { kernelByName } from '../kernels/kernels.js';
 import { KERNEL_NAMES } from '../types.js';
-import { kernelStencil, STENCIL_MASS_TOLERANCE, stencilRadius, stencilSubOffsets } from './kde-stencil.js';
+import {
+  kernelStencil,
+  STENCIL_MASS_TOLERANCE,
+  stencilRadius,
+  stencilSubOffsets,
+} from './kde-stencil.js';
 
 describe('kernelStencil', () => {
   it('samples the quartic at cell centres when the lattice resolves it (K(0) = 3/π per h², DOMAIN.md [D])', () => {

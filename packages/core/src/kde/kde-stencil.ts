@@ -63,7 +63,12 @@ export function stencilSubOffsets(s: number): Float64Array {
  * @example
  * stencilRadius(kernelByName('quartic'), 2500, 50, 1); // 50
  */
-export function stencilRadius(kernel: Kernel, h: number, cellSize: number, oversample: number): number {
+export function stencilRadius(
+  kernel: Kernel,
+  h: number,
+  cellSize: number,
+  oversample: number,
+): number {
   const reachCells = (kernel.reach * h) / cellSize;
   // Cell means look half a cell further than the centre sample.
   return Math.max(1, Math.ceil(oversample > 1 ? reachCells + 0.5 : reachCells));

@@ -38,7 +38,12 @@ export function fftSize(n: number): number {
  * @example
  * const spec = fft2dRealForward(grid, 256, 128);
  */
-export function fft2dRealForward(real: Float64Array, px: number, py: number, signal?: AbortSignal): Float64Array {
+export function fft2dRealForward(
+  real: Float64Array,
+  px: number,
+  py: number,
+  signal?: AbortSignal,
+): Float64Array {
   const half = px / 2 + 1;
   const spec = new Float64Array(2 * half * py);
   const rowFft = new FFT(px);

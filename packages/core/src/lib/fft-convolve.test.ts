@@ -50,7 +50,8 @@ describe('fft2dRealForward', () => {
     for (let k = 0; k < f.length; k++) f[k] = rng.normal();
     const out = new Float64Array(10 * 5);
     fft2dRealInverseWindow(fft2dRealForward(f, px, py), px, py, 3, 7, 10, 5, out);
-    for (let y = 0; y < 5; y++) for (let x = 0; x < 10; x++) expect(out[x + y * 10]).toBeCloseTo(f[3 + x + (7 + y) * px], 10);
+    for (let y = 0; y < 5; y++)
+      for (let x = 0; x < 10; x++) expect(out[x + y * 10]).toBeCloseTo(f[3 + x + (7 + y) * px], 10);
   });
 });
 
@@ -63,7 +64,8 @@ describe('fftConvolutionApply', () => {
     const sw = 2 * rx + 1;
     const stencil = new Float64Array(sw * (2 * ry + 1));
     for (let dy = -ry; dy <= ry; dy++) {
-      for (let dx = -rx; dx <= rx; dx++) stencil[dx + rx + (dy + ry) * sw] = 1 / (1 + dx * dx + 2 * dy * dy);
+      for (let dx = -rx; dx <= rx; dx++)
+        stencil[dx + rx + (dy + ry) * sw] = 1 / (1 + dx * dx + 2 * dy * dy);
     }
     const plan = fftConvolutionPlan(stencil, rx, ry, nx, ny);
     expect(plan.px).toBe(32);
@@ -71,7 +73,9 @@ describe('fftConvolutionApply', () => {
     const rng = randomSeeded(5);
     const input = new Float64Array(plan.px * plan.py);
     // Heavy values on the block edges would alias across the seam if the padding were wrong.
-    for (let y = 0; y < ny; y++) for (let x = 0; x < nx; x++) input[x + y * plan.px] = x === 0 || y === ny - 1 ? 100 : rng.uniform();
+    for (let y = 0; y < ny; y++)
+      for (let x = 0; x < nx; x++)
+        input[x + y * plan.px] = x === 0 || y === ny - 1 ? 100 : rng.uniform();
     const w = nx - 2 * rx;
     const h = ny - 2 * ry;
     const out = new Float64Array(w * h);
@@ -80,7 +84,8 @@ describe('fftConvolutionApply', () => {
       for (let x = rx; x < rx + w; x++) {
         let s = 0;
         for (let dy = -ry; dy <= ry; dy++) {
-          for (let dx = -rx; dx <= rx; dx++) s += input[x - dx + (y - dy) * plan.px] * stencil[dx + rx + (dy + ry) * sw];
+          for (let dx = -rx; dx <= rx; dx++)
+            s += input[x - dx + (y - dy) * plan.px] * stencil[dx + rx + (dy + ry) * sw];
         }
         expect(out[x - rx + (y - ry) * w]).toBeCloseTo(s, 9);
       }
@@ -91,6 +96,8 @@ describe('fftConvolutionApply', () => {
     const stencil = new Float64Array(9).fill(1);
     const plan = fftConvolutionPlan(stencil, 1, 1, 8, 8);
     const input = new Float64Array(plan.px * plan.py);
-    expect(() => fftConvolutionApply(plan, input, 0, 1, 6, 6, new Float64Array(36))).toThrow(/wrap-around/);
+    expect(() => fftConvolutionApply(plan, input, 0, 1, 6, 6, new Float64Array(36))).toThrow(
+      /wrap-around/,
+    );
   });
 });
