@@ -28,6 +28,10 @@ describe('configFromEnv', () => {
     expect((error as Error).message).toContain('PORT: must be a whole number between 1 and 65535');
   });
 
+  it('derives the default public URL from PORT', () => {
+    expect(configFromEnv({ NODE_ENV: 'test', PORT: '8080' }).publicUrl).toBe('http://localhost:8080');
+  });
+
   it('rejects a port out of range', () => {
     expect(() => configFromEnv({ PORT: '70000' })).toThrow(/PORT: must be a whole number between 1 and 65535/);
   });

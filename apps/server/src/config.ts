@@ -26,7 +26,7 @@ const envSchema = z.object({
   HOST: z.string().min(1).optional(),
   DATA_DIR: z.string().min(1, 'must be a folder path').default('./data'),
   DATABASE_FILE: z.string().min(1).optional(),
-  PUBLIC_URL: urlFromEnv.default('http://localhost:3000'),
+  PUBLIC_URL: urlFromEnv.optional(),
   SESSION_SECRET: z.string().min(32, 'must be at least 32 characters (e.g. `openssl rand -hex 32`)').optional(),
   SESSION_TTL_HOURS: z.coerce.number({ message: 'must be a number of hours' }).positive('must be a positive number of hours').default(24 * 7),
   TRUST_PROXY: booleanFromEnv.default(false),
@@ -125,7 +125,7 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
   if (problems.length > 0) throw new ConfigError(problems);
 
   const dataDir = resolve(e.DATA_DIR);
-  const publicUrl = e.PUBLIC_URL.replace(/\/+$/, '');
+  const publicUrl = (e.PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
   const fakeBase = `http://localhost:${e.OAUTH_FAKE_PORT}`;
   return {
     nodeEnv: e.NODE_ENV,
