@@ -1,7 +1,7 @@
 import { gridBilinearAt } from '../grid/grid-bilinear-at.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeBinned } from './kde-binned.js';
-import { kdeBinnedMeetsBound } from './kde-cell-rule.js';
+import { densityMethodCost } from './kde-cost.js';
 import { kdeExact } from './kde-exact.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
 
@@ -11,7 +11,7 @@ export const ADAPTIVE_MAX_FACTOR = 5;
 export interface KdeAdaptiveOptions {
   /** Bandwidth of the fixed pilot estimate in metres; default the global bandwidth h₀. */
   pilotBandwidth?: number;
-  /** How the pilot grid is computed; default binned when it meets its error bound, else exact. */
+  /** How the pilot grid is computed; default as `densityMethodCost` chooses (cost and error bound). */
   pilotMethod?: 'exact' | 'binned';
   signal?: AbortSignal;
 }
@@ -53,8 +53,7 @@ export function kdeAdaptiveBandwidths(
 ): KdeAdaptiveBandwidths {
   const hp = options.pilotBandwidth ?? h0;
   const method =
-    options.pilotMethod ??
-    (kdeBinnedMeetsBound(kernelName, hp, spec.cellSize) ? 'binned' : 'exact');
+    options.pilotMethod ?? densityMethodCost(points.x.length, spec, kernelName, hp).method;
   const grid =
     method === 'binned'
       ? kdeBinned(points, spec, kernelName, hp, { signal: options.signal })

@@ -187,6 +187,18 @@ describe('kdeBinned', () => {
     for (let c = 0; c < 2500; c++) expect(masked[c]).toBe(mask[c] ? full[c] : 0);
   });
 
+  it('refuses a lattice beyond the FFT limit with GRID_TOO_LARGE and says what to change', () => {
+    const spec: GridSpec = { originX: 0, originY: 0, cellSize: 1, width: 4000, height: 4000 };
+    let err: unknown;
+    try {
+      kdeBinned(points([5], [5], [1]), spec, 'quartic', 300);
+    } catch (e) {
+      err = e;
+    }
+    expect(isCoreError(err, 'GRID_TOO_LARGE')).toBe(true);
+    expect((err as Error).message).toMatch(/use a larger cell size/);
+  });
+
   it('stops with code ABORTED when the signal has fired', () => {
     const ctl = new AbortController();
     ctl.abort();

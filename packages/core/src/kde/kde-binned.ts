@@ -1,11 +1,42 @@
-import { throwIfAborted } from '../errors.js';
+import { CoreError, throwIfAborted } from '../errors.js';
 import { kernelByName } from '../kernels/kernels.js';
+import { fftSize } from '../lib/fft-2d.js';
 import { fftConvolutionApply, fftConvolutionPlan } from '../lib/fft-convolve.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeContributingPoints } from './kde-contributing.js';
 import { kdeLinearBinning } from './kde-linear-binning.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
 import { kernelStencil } from './kde-stencil.js';
+
+/**
+ * Largest FFT lattice (px·py) the binned method and the edge factor accept: 2²⁵ cells, about
+ * 1 GB at the peak of a convolution (lattice, half spectrum, stencil spectrum, placed stencil).
+ */
+export const BINNED_MAX_FFT_CELLS = 2 ** 25;
+
+/**
+ * Throws GRID_TOO_LARGE when the zero-padded FFT lattice for this grid and stencil radius
+ * would exceed {@link BINNED_MAX_FFT_CELLS}.
+ *
+ * @param spec the grid
+ * @param radius stencil radius in cells
+ * @returns the lattice size px·py
+ * @example
+ * binnedLatticeCheck(spec, 50); // 4194304 for a 1000 × 1000 grid
+ */
+export function binnedLatticeCheck(spec: GridSpec, radius: number): number {
+  const cells = fftSize(spec.width + 2 * radius) * fftSize(spec.height + 2 * radius);
+  if (cells > BINNED_MAX_FFT_CELLS) {
+    throw new CoreError(
+      'GRID_TOO_LARGE',
+      `the FFT for a ${spec.width} × ${spec.height} grid with a kernel ${radius} cells wide needs ${cells} cells ` +
+        `(limit ${BINNED_MAX_FFT_CELLS}); use a larger cell size, a smaller study area or the exact method`,
+      'cellSize',
+      { fftCells: cells, limit: BINNED_MAX_FFT_CELLS },
+    );
+  }
+  return cells;
+}
 
 /** FFT round-off is ≈ 1e-16 of the peak; values below this share of the peak are set to 0. */
 export const BINNED_ROUNDOFF_FLOOR = 1e-12;
@@ -55,6 +86,7 @@ export function kdeBinned(
   const r = stencil.radius;
   const nx = width + 2 * r;
   const ny = height + 2 * r;
+  binnedLatticeCheck(spec, r);
   throwIfAborted(signal);
   const plan = fftConvolutionPlan(stencil.values, r, r, nx, ny, signal);
   onProgress?.(0.3);

@@ -25,6 +25,11 @@ describe('densityMethodCost', () => {
     expect(densityMethodCost(1e6, big, 'quartic', 1000).method).toBe('exact'); // δ/h = 0.05 > 0.03
   });
 
+  it('picks exact when the FFT lattice would not fit in memory', () => {
+    const huge: GridSpec = { originX: 0, originY: 0, cellSize: 1, width: 4000, height: 4000 };
+    expect(densityMethodCost(1e7, huge, 'quartic', 300).method).toBe('exact');
+  });
+
   it('charges the adaptive pilot and edge correction on top, and the adaptive sum is exact', () => {
     const plain = densityMethodCost(1e5, big, 'quartic', 2500);
     const adaptive = densityMethodCost(1e5, big, 'quartic', 2500, { adaptive: true });

@@ -1,6 +1,7 @@
 import { kernelByName } from '../kernels/kernels.js';
 import { fftSize } from '../lib/fft-2d.js';
 import type { DensityMethod, GridSpec, KernelName } from '../types.js';
+import { BINNED_MAX_FFT_CELLS } from './kde-binned.js';
 import { kdeBinnedMeetsBound } from './kde-cell-rule.js';
 import { kernelStencil } from './kde-stencil.js';
 
@@ -46,7 +47,8 @@ function convolutionSeconds(spec: GridSpec, radius: number): number {
 /**
  * Estimated cost of each method and the choice `auto` makes: exact costs n × cells within the
  * kernel's reach (× s² sub-samples for narrow kernels), binned costs n + FFT size·log(FFT size).
- * Binned is chosen only when it meets its error bound at this h/cellSize and is cheaper; the
+ * Binned is chosen only when it meets its error bound at this h/cellSize, its FFT lattice fits
+ * in {@link BINNED_MAX_FFT_CELLS} and it is cheaper; the
  * adaptive estimate always runs the exact sum (its pilot may be binned).
  *
  * @param n number of points
@@ -77,6 +79,9 @@ export function densityMethodCost(
       : KDE_COST_SECONDS.exactVisit * n * cellsInReach * s * s;
   const fftSeconds = convolutionSeconds(spec, stencil.radius);
   const binnedSeconds = KDE_COST_SECONDS.binPoint * n + fftSeconds;
+  const binnedFits =
+    fftSize(spec.width + 2 * stencil.radius) * fftSize(spec.height + 2 * stencil.radius) <=
+    BINNED_MAX_FFT_CELLS;
   const binnedMeetsBound = kdeBinnedMeetsBound(kernel, bandwidth, spec.cellSize);
   let method: DensityMethod;
   let seconds: number;
@@ -86,7 +91,7 @@ export function densityMethodCost(
       Math.min(binnedMeetsBound ? binnedSeconds : Infinity, exactSeconds) +
       ADAPTIVE_VISIT_FACTOR * exactSeconds;
   } else {
-    method = binnedMeetsBound && binnedSeconds < exactSeconds ? 'binned' : 'exact';
+    method = binnedMeetsBound && binnedFits && binnedSeconds < exactSeconds ? 'binned' : 'exact';
     seconds = method === 'binned' ? binnedSeconds : exactSeconds;
   }
   if (options.edgeCorrection) seconds += fftSeconds;

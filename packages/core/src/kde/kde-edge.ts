@@ -2,6 +2,7 @@ import { throwIfAborted } from '../errors.js';
 import { kernelByName } from '../kernels/kernels.js';
 import { fftConvolutionApply, fftConvolutionPlan } from '../lib/fft-convolve.js';
 import type { GridSpec, KernelName } from '../types.js';
+import { binnedLatticeCheck } from './kde-binned.js';
 import { kernelStencil } from './kde-stencil.js';
 
 /**
@@ -40,6 +41,7 @@ export function kdeEdgeFactor(
   const stencil = kernelStencil(kernelByName(kernelName), bandwidth, spec.cellSize);
   const { width, height } = spec;
   const r = stencil.radius;
+  binnedLatticeCheck(spec, r);
   throwIfAborted(signal);
   const plan = fftConvolutionPlan(stencil.values, r, r, width + 2 * r, height + 2 * r, signal);
   const input = new Float64Array(plan.px * plan.py);
