@@ -3,10 +3,11 @@ import { kernelByName, type Kernel } from '../kernels/kernels.js';
 import type { GridSpec, KernelName, PlanarPoints } from '../types.js';
 import { kdeContributingPoints } from './kde-contributing.js';
 import { kdePointOrder } from './kde-point-order.js';
+import { cellMeansAdd } from './kde-exact-cell-means.js';
 import { discRunsAdd, discRunsResolve } from './kde-exact-disc.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
 import { kdeRowRun } from './kde-row-run.js';
-import { kernelStencil, REACH_SQ_SHRINK, stencilSubOffsets } from './kde-stencil.js';
+import { kernelStencil, REACH_SQ_SHRINK } from './kde-stencil.js';
 
 export interface KdeExactOptions extends KdeGridOptions {
   /** Per-point bandwidths in metres (adaptive estimate); `bandwidth` is then only a fallback. */
@@ -92,7 +93,7 @@ export function kdeExact(
     } else if (s === 1) {
       sumCentres(points, order, i, end, spec, kernel, bandwidth, bandwidths, values, contributors);
     } else {
-      sumCellMeans(
+      cellMeansAdd(
         points,
         order,
         i,
@@ -231,62 +232,3 @@ const POLY_POWER: Partial<Record<string, number>> = {
   quartic: 2,
   triweight: 3,
 };
-
-function sumCellMeans(
-  points: PlanarPoints,
-  order: Uint32Array,
-  from: number,
-  to: number,
-  spec: GridSpec,
-  kernel: Kernel,
-  bandwidth: number,
-  bandwidths: Float64Array | undefined,
-  mask: Uint8Array | undefined,
-  values: Float64Array,
-  contributors: Uint32Array | undefined,
-  s: number,
-): void {
-  const { x, y, w } = points;
-  const { originX, originY, cellSize, width, height } = spec;
-  const sub = stencilSubOffsets(s);
-  const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
-  for (let o = from; o < to; o++) {
-    const k = order[o];
-    const wk = w[k];
-    if (wk === 0) continue;
-    const h = bandwidths ? bandwidths[k] : bandwidth;
-    const invH = 1 / h;
-    const scale = (wk * invH * invH) / (s * s);
-    const fx = (x[k] - originX) / cellSize - 0.5;
-    const fy = (y[k] - originY) / cellSize - 0.5;
-    // A cell's sub-samples reach half a cell beyond its centre.
-    const rc = (kernel.reach * h) / cellSize + 0.5;
-    const i0 = Math.max(0, Math.ceil(fx - rc));
-    const i1 = Math.min(width - 1, Math.floor(fx + rc));
-    const j0 = Math.max(0, Math.ceil(fy - rc));
-    const j1 = Math.min(height - 1, Math.floor(fy + rc));
-    const stepR = cellSize * invH;
-    for (let j = j0; j <= j1; j++) {
-      const row = j * width;
-      for (let i = i0; i <= i1; i++) {
-        const c = row + i;
-        if (mask !== undefined && mask[c] === 0) continue;
-        let acc = 0;
-        for (let q = 0; q < s; q++) {
-          const dy = (j + sub[q] - fy) * stepR;
-          const dy2 = dy * dy;
-          if (dy2 >= reach2) continue;
-          for (let p = 0; p < s; p++) {
-            const dx = (i + sub[p] - fx) * stepR;
-            const r2 = dx * dx + dy2;
-            if (r2 < reach2) acc += kernel.valueSq(r2);
-          }
-        }
-        if (acc > 0) {
-          values[c] += scale * acc;
-          if (contributors !== undefined) contributors[c]++;
-        }
-      }
-    }
-  }
-}
