@@ -14,8 +14,11 @@ import { kernelStencil } from './kde-stencil.js';
 export const KDE_COST_SECONDS = {
   /** One kernel evaluation at one cell in the exact sum. */
   exactVisit: 3e-9,
-  /** One row run of the uniform disc's difference-array sum (0.88 s for 10⁵ points × 204 runs). */
-  discRowRun: 4.3e-8,
+  /**
+   * One row run of the difference-array sums (uniform disc, Epanechnikov with centre samples):
+   * ≈ 0.5 s per 10⁵ points × 101 rows, 1.0 s with 2 × 2 cell means.
+   */
+  rowRun: 5e-8,
   /** One point spread over four lattice nodes (random order, so mostly cache misses). */
   binPoint: 1.5e-7,
   /** One element·log₂(size) of a 2-D real FFT, times the three FFTs of a convolution. */
@@ -74,8 +77,8 @@ export function densityMethodCost(
   const rc = (k.reach * bandwidth) / spec.cellSize + (s > 1 ? 0.5 : 0);
   const cellsInReach = Math.min(Math.PI * rc * rc + 4 * rc + 1, spec.width * spec.height);
   const exactSeconds =
-    kernel === 'uniform'
-      ? KDE_COST_SECONDS.discRowRun * n * Math.min(2 * rc + 1, spec.height) * s
+    kernel === 'uniform' || (kernel === 'epanechnikov' && s === 1)
+      ? KDE_COST_SECONDS.rowRun * n * Math.min(2 * rc + 1, spec.height) * s
       : KDE_COST_SECONDS.exactVisit * n * cellsInReach * s * s;
   const fftSeconds = convolutionSeconds(spec, stencil.radius);
   const binnedSeconds = KDE_COST_SECONDS.binPoint * n + fftSeconds;

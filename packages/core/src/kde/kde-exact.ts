@@ -5,6 +5,7 @@ import { kdeContributingPoints } from './kde-contributing.js';
 import { kdePointOrder } from './kde-point-order.js';
 import { cellMeansAdd } from './kde-exact-cell-means.js';
 import { discRunsAdd, discRunsResolve } from './kde-exact-disc.js';
+import { parabolaRunsAdd, parabolaRunsCreate, parabolaRunsResolve } from './kde-exact-parabola.js';
 import type { KdeGridOptions, KdeGridResult } from './kde-options.js';
 import { kdeRowRun } from './kde-row-run.js';
 import { kernelStencil, REACH_SQ_SHRINK } from './kde-stencil.js';
@@ -62,12 +63,15 @@ export function kdeExact(
 
   // The uniform disc is summed by row runs (kde-exact-disc.ts): rows, not cells, per point.
   const disc = kernel.name === 'uniform';
+  // Epanechnikov with centre samples likewise, by row parabolas (kde-exact-parabola.ts).
+  const parabola =
+    kernel.name === 'epanechnikov' && s === 1 ? parabolaRunsCreate(width, height) : undefined;
   const diff = disc ? new Float64Array((width + 1) * height) : undefined;
   const countDiff = disc ? new Int32Array((width + 1) * height) : undefined;
   const reach2 = kernel.reach * kernel.reach * REACH_SQ_SHRINK;
   const visitsPerPoint = (h: number): number => {
     const side = (2 * kernel.reach * h) / cellSize + 2;
-    return disc ? side * s : side * side * s * s;
+    return disc || parabola ? side * s : side * side * s * s;
   };
   const order = kdePointOrder(points, spec);
   let i = 0;
@@ -75,7 +79,20 @@ export function kdeExact(
     throwIfAborted(signal);
     const budget = Math.max(1, Math.floor(VISITS_PER_CHUNK / visitsPerPoint(bandwidth)));
     const end = Math.min(n, i + budget);
-    if (diff && countDiff) {
+    if (parabola) {
+      parabolaRunsAdd(
+        points,
+        order,
+        i,
+        end,
+        spec,
+        kernel.valueSq(0),
+        reach2,
+        bandwidth,
+        bandwidths,
+        parabola,
+      );
+    } else if (diff && countDiff) {
       discRunsAdd(
         points,
         order,
@@ -111,6 +128,7 @@ export function kdeExact(
     i = end;
     onProgress?.(i / n);
   }
+  if (parabola) parabolaRunsResolve(parabola, width, height, values, contributors);
   if (diff && countDiff) discRunsResolve(diff, countDiff, width, height, values, contributors);
   // Cells outside the study area are summed like the others (a branch in the hot loop costs more
   // than the wasted cells) and cleared here.
@@ -198,12 +216,6 @@ function sumCentres(
           const t = 1 - (dx * dx + dy2);
           values[row + i] += rowScale * t * t;
         }
-      } else if (q === 1) {
-        const rowScale = scale * c0;
-        for (let i = a; i <= b; i++) {
-          const dx = (i - fx) * stepR;
-          values[row + i] += rowScale * (1 - (dx * dx + dy2));
-        }
       } else if (q === 3) {
         const rowScale = scale * c0;
         for (let i = a; i <= b; i++) {
@@ -228,7 +240,6 @@ function sumCentres(
 /** Power q of the kernels of the form c(1 − r²)^q, evaluated inline in the hot loop. */
 const POLY_POWER: Partial<Record<string, number>> = {
   uniform: 0,
-  epanechnikov: 1,
   quartic: 2,
   triweight: 3,
 };
