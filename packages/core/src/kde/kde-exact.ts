@@ -24,9 +24,14 @@ const VISITS_PER_CHUNK = 4_000_000;
 
 /**
  * Weighted kernel intensity by direct summation: λ̂(c) = Σᵢ wᵢ K_hᵢ(c − xᵢ) at every cell
- * centre c, in weight per m². Each point visits only the cells within its kernel's reach (the
- * bounding box of the disc of radius reach·h, rows outside the disc skipped), so the cost is
- * n × (cells in reach) — the bucketing is by point, not by cell, which needs no index at all.
+ * centre c, in weight per m². Each point visits only the run of cells inside its kernel's disc
+ * in each row, so the cost is n × (cells in reach) — the bucketing is by point, not by cell,
+ * which needs no index; points are visited in cell order for cache locality (measured: ≈ 10 %
+ * faster than input order for the cell loop, ≈ 40 % for the row-run sums). The uniform disc and
+ * the Epanechnikov kernel (centre samples) are summed per row run in difference arrays instead,
+ * n × (rows in reach). Measured CPU time per cell visit: 2.0–3.5 ns (Gaussian 2.0 with a
+ * separable exp, quartic 2.5, triangular 3.5); 10⁶ points with a 50-cell radius: Epanechnikov
+ * 3.3 s, uniform 8.9 s (2 × 2 cell means), quartic ≈ 30 s.
  *
  * The kernel is evaluated exactly as the binned method's stencil samples it (see
  * {@link kernelStencil}): at cell centres, or as cell means on an s × s sub-lattice when the
