@@ -42,3 +42,5 @@ export * from './raster/geotiff-encode.js';
 export * from './pipeline/density-contours.js';
 export * from './pipeline/density-from-planar.js';
 export * from './pipeline/density-from-lon-lat.js';
+export * from './raster/raster-web-mercator.js';
+export * from './pricing/credit-cost.js';
