@@ -58,8 +58,8 @@ describe('demandscape density reproduces the scipy / scikit-learn reference [S: 
   const key = (i: number, j: number) =>
     `${Math.round((g.originX + (i + 0.5) * g.cellSize) * 1000)},${Math.round((g.originY + (j + 0.5) * g.cellSize) * 1000)}`;
 
-  // Uniform is left out: on a 50 m grid its disc needs cell means (see kde-stencil.ts), which
-  // the reference's point values do not describe; the engine test checks it with point values.
+  // Uniform is checked separately: on a 50 m grid its disc needs cell means (see kde-stencil.ts),
+  // so the CLI is compared with the reference's cell means rather than its point values.
   for (const c of ref.cases.filter((k) => k.kernel !== 'uniform')) {
     it(`exact ${c.kernel}: every sampled cell within 1e-9 relative`, async () => {
       const out = join(dir, `ref-${c.kernel}.csv`);
@@ -73,6 +73,19 @@ describe('demandscape density reproduces the scipy / scikit-learn reference [S: 
       expect(referenceExcess(c, (i, j) => m.get(key(i, j)) as number, 1e-9, absOfMax)).toBeLessThanOrEqual(0);
     });
   }
+
+  it('exact uniform: cell means on the 2 × 2 sub-lattice match sklearn tophat means within 1e-9', async () => {
+    const c = ref.cases.find((k) => k.kernel === 'uniform') as (typeof ref.cases)[number];
+    const means = c.cellMeans as { oversample: number; values: number[] };
+    const out = join(dir, 'ref-uniform.csv');
+    const args = ['density', '--input', input, '--planar', '--weight', 'weight', '--kernel', 'uniform', '--bandwidth', String(c.bandwidth)];
+    const r = await run([...args, '--cell-size', '50', '--extent', extent, '--method', 'exact', '--output', out]);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toContain(`cell means on a ${means.oversample} × ${means.oversample} sub-grid`);
+    const m = densityCsvRead(out);
+    const meanCase = { ...c, samples: c.samples.map(([i, j], k) => [i, j, means.values[k]] as [number, number, number]) };
+    expect(referenceExcess(meanCase, (i, j) => m.get(key(i, j)) as number, 1e-9, 1e-12)).toBeLessThanOrEqual(0);
+  });
 
   for (const c of ref.cases.filter((k) => ['gaussian', 'quartic'].includes(k.kernel))) {
     it(`binned ${c.kernel}: every sampled cell within 1e-3 × max`, async () => {

@@ -15,6 +15,8 @@ export interface ReferenceCase {
   maxCell: { i: number; j: number };
   integral: number;
   samples: Array<[number, number, number]>;
+  /** Uniform only: sklearn tophat averaged over an s × s sub-lattice of each sampled cell. */
+  cellMeans?: { oversample: number; values: number[] };
 }
 
 export interface KdeReference {
