@@ -11,3 +11,6 @@ export * from './alert';
 export * from './badge';
 export * from './empty-state';
 export * from './logo-mark';
+export * from './progress';
+export * from './file-drop';
+export * from './stat';

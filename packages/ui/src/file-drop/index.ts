@@ -1,0 +1,1 @@
+export { FileDrop, type FileDropProps } from './file-drop';

@@ -1,0 +1,1 @@
+export { ProgressBar, type ProgressBarProps } from './progress-bar';

@@ -1,0 +1,1 @@
+export { Stat, type StatProps } from './stat';
