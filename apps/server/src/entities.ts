@@ -1,5 +1,9 @@
 import { AuditEventSchema } from './modules/audit/audit-event.entity.js';
 import { AuthTokenSchema } from './modules/auth/auth-token.entity.js';
+import { BillingAccountSchema } from './modules/billing/billing-account.entity.js';
+import { BillingReceiptSchema, BillingWebhookEventSchema } from './modules/billing/billing-receipt.entity.js';
+import { CreditEntrySchema } from './modules/billing/credit-entry.entity.js';
+import { InvitationSchema } from './modules/invitation/invitation.entity.js';
 import { MembershipSchema } from './modules/organization/membership.entity.js';
 import { OrganizationSchema } from './modules/organization/organization.entity.js';
 import { SessionSchema } from './modules/session/session.entity.js';
@@ -7,4 +11,4 @@ import { UserSchema } from './modules/user/user.entity.js';
 import { WorkspaceSchema } from './modules/workspace/workspace.entity.js';
 
 /** Every entity schema; new modules add theirs here (and a migration in src/migrations). */
-export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema];
+export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema];

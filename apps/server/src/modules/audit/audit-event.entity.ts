@@ -14,6 +14,15 @@ export const AUDIT_ACTIONS = [
   'workspace.create',
   'workspace.update',
   'workspace.delete',
+  'billing.checkout',
+  'billing.purchase',
+  'billing.seats_change',
+  'invitation.create',
+  'invitation.revoke',
+  'invitation.resend',
+  'invitation.accept',
+  'member.role_change',
+  'member.remove',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

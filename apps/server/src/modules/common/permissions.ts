@@ -13,6 +13,9 @@ export const PERMISSIONS = {
   'workspace.create': ['owner', 'analyst', 'planner'],
   'workspace.update': ['owner', 'analyst', 'planner'],
   'workspace.delete': ['owner', 'analyst'],
+  'billing.manage': ['owner'],
+  'invitation.manage': ['owner'],
+  'members.manage': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;
