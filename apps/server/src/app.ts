@@ -12,6 +12,8 @@ import type { AppConfig } from './config.js';
 import { ormInit } from './db.js';
 import { loggerCreate } from './logger.js';
 import { authRoutes } from './modules/auth/auth.routes.js';
+import { customerFilesInterrupted } from './modules/customer-file/customer-file-import.js';
+import { customerFileRoutes } from './modules/customer-file/customer-file.routes.js';
 import { passportCreate } from './modules/auth/passport-setup.js';
 import { AppError } from './modules/common/errors.js';
 import { apiNotFound, errorHandler } from './modules/common/error-handler.js';
@@ -136,6 +138,9 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
     }),
   );
   app.use('/api/me', meRoutes(em, sessionStore));
+  await customerFilesInterrupted(orm);
+  const customerFiles = customerFileRoutes({ em, orm, uploadsDir: config.uploadsDir, uploadMaxBytes: config.uploadMaxBytes });
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId/customer-files', customerFiles.router);
   app.use('/api/organizations', organizationRoutes(em));
   app.use('/api', apiNotFound());
   const servesWeb = webStaticMount(app, config.webDist);
@@ -149,6 +154,7 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
     servesWeb,
     close: async () => {
       clearInterval(pruneTimer);
+      await customerFiles.imports.idle();
       mailer.close();
       await orm.close(true);
     },

@@ -46,6 +46,7 @@ const envSchema = z.object({
   RATE_LIMIT_AUTH_PER_MINUTE: z.coerce.number({ message: 'must be a whole number' }).int().min(1, 'must be at least 1').default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   WEB_DIST: z.string().min(1).optional(),
+  UPLOAD_MAX_BYTES: z.coerce.number({ message: 'must be a whole number of bytes' }).int('must be a whole number of bytes').min(1, 'must be at least 1 byte').default(200 * 1024 * 1024),
 });
 
 /** Validated server settings; every field has a safe local default except production secrets. */
@@ -77,6 +78,10 @@ export interface AppConfig {
   rateLimitAuthPerMinute: number;
   logLevel: string;
   webDist: string;
+  /** Largest customer-file upload in bytes (UPLOAD_MAX_BYTES, default 200 MB). */
+  uploadMaxBytes: number;
+  /** Raw customer-file uploads waiting for import: `${DATA_DIR}/uploads`. */
+  uploadsDir: string;
 }
 
 /** Thrown when environment variables are invalid; the message lists every bad variable. */
@@ -161,6 +166,8 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
     rateLimitAuthPerMinute: e.RATE_LIMIT_AUTH_PER_MINUTE,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     webDist: resolve(e.WEB_DIST ?? join(packageDir, '..', 'web', 'dist')),
+    uploadMaxBytes: e.UPLOAD_MAX_BYTES,
+    uploadsDir: join(dataDir, 'uploads'),
   };
 }
 

@@ -13,6 +13,10 @@ export const PERMISSIONS = {
   'workspace.create': ['owner', 'analyst', 'planner'],
   'workspace.update': ['owner', 'analyst', 'planner'],
   'workspace.delete': ['owner', 'analyst'],
+  // Metadata and the validation report's counts only; never points or raw rows.
+  'customerFile.read': ROLES,
+  'customerFile.write': ['owner', 'analyst'],
+  'customerPoints.read': ['owner', 'analyst'],
   'billing.manage': ['owner'],
   'invitation.manage': ['owner'],
   'members.manage': ['owner'],
