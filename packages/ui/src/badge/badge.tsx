@@ -2,7 +2,7 @@ import { cva, type VariantProps } from 'class-variance-authority';
 import type { HTMLAttributes } from 'react';
 import { cn } from '../lib/cn';
 
-const badgeVariants = cva('inline-flex items-center rounded-full px-2 py-0.5 text-xs font-medium', {
+const badgeVariants = cva('inline-flex items-center whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-medium', {
   variants: {
     tone: {
       neutral: 'bg-sunken text-ink-muted',

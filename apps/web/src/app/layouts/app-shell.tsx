@@ -38,7 +38,7 @@ export function AppShell({ me, orgId, children }: AppShellProps) {
             <span className="hidden sm:inline">Demandscape</span>
           </Link>
           <span className="h-6 w-px bg-line" aria-hidden="true" />
-          <OrgSwitcher currentOrgId={membership?.organization.id} />
+          <OrgSwitcher currentOrgId={membership?.organization.id} currentOrgName={membership?.organization.name} />
           {membership ? <Badge tone={membership.role === 'owner' ? 'accent' : 'neutral'}>{roleLabels[membership.role]}</Badge> : null}
           {membership ? <AppNav orgId={membership.organization.id} role={membership.role} /> : null}
           <div className="ml-auto flex items-center gap-2">

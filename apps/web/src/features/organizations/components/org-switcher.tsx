@@ -10,11 +10,11 @@ import { CreateOrganizationForm } from './create-organization-form';
 /**
  * The header control that shows the current organization, lists every organization the user
  * belongs to (with their role there), and creates a new one.
- * @param props the organization in view, if any
+ * @param props the organization in view, if any, and its name (shown while the list loads)
  * @returns the switcher button, its menu and the create dialog
- * @example <OrgSwitcher currentOrgId={orgId} />
+ * @example <OrgSwitcher currentOrgId={orgId} currentOrgName="Larchloaf" />
  */
-export function OrgSwitcher({ currentOrgId }: { currentOrgId?: string }) {
+export function OrgSwitcher({ currentOrgId, currentOrgName }: { currentOrgId?: string; currentOrgName?: string }) {
   const organizations = useOrganizations();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
@@ -49,7 +49,7 @@ export function OrgSwitcher({ currentOrgId }: { currentOrgId?: string }) {
         className="flex h-9 max-w-64 items-center gap-2 rounded-control border border-line bg-surface px-3 text-sm hover:bg-sunken"
       >
         <span className="sr-only">Organization:</span>
-        <span className="truncate font-medium">{current?.name ?? 'Choose organization'}</span>
+        <span className="truncate font-medium">{current?.name ?? currentOrgName ?? 'Choose organization'}</span>
         <svg viewBox="0 0 16 16" className="size-3.5 shrink-0 text-ink-muted" aria-hidden="true">
           <path d="M4 6l4 4 4-4" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinecap="round" />
         </svg>
