@@ -14,3 +14,4 @@ export * from './logo-mark';
 export * from './progress';
 export * from './file-drop';
 export * from './stat';
+export * from './legend';
