@@ -9,4 +9,9 @@ describe('envFrom', () => {
   it('names the bad variable and the rule', () => {
     expect(() => envFrom({ VITE_API_ORIGIN: 'localhost:3000' })).toThrow(/VITE_API_ORIGIN: must be an absolute http\(s\) URL/);
   });
+
+  it('checks the basemap style URL and defaults to the demo basemap', () => {
+    expect(envFrom({}).VITE_BASEMAP_STYLE_URL).toBe('');
+    expect(() => envFrom({ VITE_BASEMAP_STYLE_URL: 'tiles/style.json' })).toThrow(/VITE_BASEMAP_STYLE_URL: must be an absolute http\(s\) URL of a MapLibre style JSON/);
+  });
 });

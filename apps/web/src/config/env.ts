@@ -5,6 +5,16 @@ const envSchema = z.object({
   VITE_API_ORIGIN: z
     .union([z.literal(''), z.url({ protocol: /^https?$/, message: 'must be an absolute http(s) URL such as http://localhost:3000, or empty' })])
     .default(''),
+  /**
+   * MapLibre style for the map's basemap in production (a style JSON URL, e.g. a self-hosted tile server's).
+   * Empty: the offline demo basemap of the invented city of Quillport that ships with the app.
+   */
+  VITE_BASEMAP_STYLE_URL: z
+    .union([
+      z.literal(''),
+      z.url({ protocol: /^https?$/, message: 'must be an absolute http(s) URL of a MapLibre style JSON, or empty for the demo basemap' }),
+    ])
+    .default(''),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -17,6 +17,10 @@ describe('roleCan', () => {
     expect(roleCan('planner', 'workspace:delete')).toBe(false);
   });
 
+  it('shows aggregated customers to owners and analysts only ("see individual customer points")', () => {
+    expect(['owner', 'analyst', 'planner', 'executive'].filter((r) => roleCan(r as never, 'customerPoints:read'))).toEqual(['owner', 'analyst']);
+  });
+
   it('allows nothing without a role', () => {
     expect(roleCan(undefined, 'workspace:read')).toBe(false);
   });

@@ -9,6 +9,8 @@ const permissionRoles = {
   'workspace:create': ['owner', 'analyst', 'planner'],
   'workspace:update': ['owner', 'analyst', 'planner'],
   'workspace:delete': ['owner', 'analyst'],
+  /** Aggregated customer bins on the map (never single points); executives and planners see surfaces only. */
+  'customerPoints:read': ['owner', 'analyst'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionRoles;
