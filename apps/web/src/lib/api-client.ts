@@ -69,7 +69,13 @@ async function errorFrom(response: Response): Promise<ApiError> {
   );
 }
 
-async function csrfTokenFor(): Promise<string> {
+/**
+ * The session's CSRF token (fetched once, then cached), for requests this client cannot send itself,
+ * such as a file upload that reports progress through XMLHttpRequest.
+ * @returns the token for the `x-csrf-token` header
+ * @example xhr.setRequestHeader('x-csrf-token', await csrfTokenFor());
+ */
+export async function csrfTokenFor(): Promise<string> {
   if (csrfToken) return csrfToken;
   csrfPending ??= (async () => {
     const response = await send('GET', '/auth/csrf', {}, null);
