@@ -17,7 +17,7 @@ export default function WelcomeRoute() {
         description={
           hasOrganizations
             ? 'Each organization has its own members, workspaces and credits.'
-            : 'Create an organization for your team. If a colleague has invited you instead, open the link in their invitation.'
+            : 'Create an organization for your team; you will be its owner. Workspaces, members and credits belong to an organization.'
         }
       />
       <Card className="p-6">
