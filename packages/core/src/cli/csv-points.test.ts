@@ -35,6 +35,17 @@ describe('csvPoints', () => {
     ]);
   });
 
+  it('reads quoted fields, semicolons and Windows line ends the same way', () => {
+    const quoted = csvPoints('"lon","lat","note"\r\n-38.5,44.5,"a, b"\r\n', { planar: false });
+    const semicolon = csvPoints('lon;lat\r\n-38.5;44.5\r\n', { planar: false });
+    const plain = csvPoints('lon,lat\r\n-38.5,44.5\r\n', { planar: false });
+    for (const p of [quoted, semicolon, plain]) {
+      expect(p.problems).toEqual([]);
+      expect(Array.from(p.a)).toEqual([-38.5]);
+      expect(Array.from(p.b)).toEqual([44.5]);
+    }
+  });
+
   it('accepts planar coordinates beyond the degree ranges', () => {
     const p = csvPoints('x,y\n500000,4900000\n', { planar: true });
     expect(p.problems).toEqual([]);

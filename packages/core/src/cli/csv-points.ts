@@ -17,6 +17,24 @@ export interface CsvPoints {
   problems: CsvRowProblem[];
 }
 
+/**
+ * Splits CSV text into rows of cells. The delimiter is the most frequent of , ; tab | in the
+ * header line. Without any double quote there is nothing to unescape and a plain split is several
+ * times faster than the full parser on a million rows; otherwise papaparse does it (RFC 4180
+ * quoting). Blank lines come back as one empty cell.
+ */
+function csvRows(text: string): string[][] {
+  const end = text.indexOf('\n');
+  const header = end < 0 ? text : text.slice(0, end);
+  const delimiter = [',', ';', '\t', '|'].reduce((best, d) => (header.split(d).length > header.split(best).length ? d : best));
+  if (!text.includes('"')) {
+    const lines = text.split(/\r?\n/);
+    if (lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
+    return lines.map((l) => l.split(delimiter));
+  }
+  return Papa.parse<string[]>(text, { delimiter, skipEmptyLines: false }).data;
+}
+
 function numberParse(raw: string | undefined): number {
   const s = (raw ?? '').trim();
   // Number('') is 0, so an empty cell must be caught before conversion.
@@ -35,8 +53,7 @@ function numberParse(raw: string | undefined): number {
  * const { a: lon, b: lat, w, problems } = csvPoints('lon,lat\n-38.5,44.5\n', { planar: false });
  */
 export function csvPoints(text: string, options: CsvColumnOptions): CsvPoints {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { skipEmptyLines: false });
-  const rows = parsed.data;
+  const rows = csvRows(text.replace(/^\uFEFF/, ''));
   if (rows.length === 0 || rows[0].every((c) => c.trim() === '')) {
     throw new CoreError('EMPTY_POINTS', 'the CSV is empty: it needs a header row and at least one data row', 'input');
   }
@@ -49,7 +66,7 @@ export function csvPoints(text: string, options: CsvColumnOptions): CsvPoints {
   let n = 0;
   for (let r = 1; r < rows.length; r++) {
     const row = rows[r];
-    if (row.every((c) => c.trim() === '')) continue;
+    if (row.length === 1 && row[0].trim() === '') continue;
     const line = r + 1;
     const va = numberParse(row[columns.a]);
     const vb = numberParse(row[columns.b]);

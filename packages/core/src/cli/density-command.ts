@@ -18,7 +18,8 @@ export const EXIT_BAD_ROWS = 2;
 export interface CliSurface {
   result: DensityPlanarResult;
   contours: DensityContours;
-  convert: CentreConvert;
+  /** Planar metres → lon/lat; absent for planar input. */
+  convert?: CentreConvert;
   epsg?: number;
   crs: string;
 }
@@ -92,7 +93,6 @@ export function densityCommand(opts: DensityOptions, io: CliIo): number {
     s = {
       result,
       contours: densityContours(result.surface.intensity, result.grid),
-      convert: (x, y) => ({ a: x, b: y }),
       epsg: opts.epsg,
       crs: opts.epsg ? `planar metres (EPSG:${opts.epsg})` : 'planar metres (no EPSG code given)',
     };
@@ -112,10 +112,8 @@ export function densityCommand(opts: DensityOptions, io: CliIo): number {
   progress.done();
   for (const o of opts.outputs) surfaceWrite(o.path, o.kind, s);
   const { x, y } = s.result.surface.stats.maxCell;
-  const peak = s.convert(Float64Array.of(x), Float64Array.of(y));
-  const peakAt = opts.planar
-    ? `x ${formatNumber(peak.a[0], 1)}, y ${formatNumber(peak.b[0], 1)}`
-    : `lon ${peak.a[0].toFixed(5)}, lat ${peak.b[0].toFixed(5)}`;
+  const peak = s.convert?.(Float64Array.of(x), Float64Array.of(y));
+  const peakAt = peak ? `lon ${peak.a[0].toFixed(5)}, lat ${peak.b[0].toFixed(5)}` : `x ${formatNumber(x, 1)}, y ${formatNumber(y, 1)}`;
   io.err(
     densitySummary(s.result, {
       crs: s.crs,
