@@ -1,9 +1,10 @@
-import { Spinner } from '@demandscape/ui';
+import { Alert, Button, Spinner } from '@demandscape/ui';
 import type { QueryClient } from '@tanstack/react-query';
 import { Navigate, Outlet, redirect, useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getMeQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { signedOutHere } from '../../../features/auth/api/sign-out';
+import { errorMessage } from '../../../lib/api-error';
 import { lastOrganizationId } from '../../../lib/last-organization';
 import { AppShell } from '../../layouts/app-shell';
 
@@ -34,6 +35,18 @@ export default function AppRoot() {
     // Signed out here: a plain sign-in page. Session ended otherwise (expiry, another tab): come back after.
     const returnTo = signedOutHere() ? null : location.pathname + location.search;
     return <Navigate to={paths.auth.signIn.getHref(returnTo)} replace />;
+  }
+  if (me.isError && !me.data) {
+    return (
+      <main className="mx-auto max-w-xl px-6 py-16">
+        <Alert tone="danger" title="Could not load your session">
+          {errorMessage(me.error)}
+        </Alert>
+        <Button variant="secondary" className="mt-4" onClick={() => void me.refetch()}>
+          Try again
+        </Button>
+      </main>
+    );
   }
   if (!me.data) return <Spinner size="lg" label="Loading your session" className="flex min-h-dvh items-center justify-center" />;
 

@@ -21,6 +21,7 @@ export function OrgSwitcher({ currentOrgId, currentOrgName }: { currentOrgId?: s
   const [creating, setCreating] = useState(false);
   const menuId = useId();
   const rootRef = useRef<HTMLDivElement>(null);
+  const toggleRef = useRef<HTMLButtonElement>(null);
   const current = organizations.data?.find((org) => org.id === currentOrgId);
 
   useEffect(() => {
@@ -29,7 +30,10 @@ export function OrgSwitcher({ currentOrgId, currentOrgName }: { currentOrgId?: s
       if (!rootRef.current?.contains(event.target as Node)) setOpen(false);
     };
     const onKey = (event: KeyboardEvent) => {
-      if (event.key === 'Escape') setOpen(false);
+      if (event.key === 'Escape') {
+        setOpen(false);
+        toggleRef.current?.focus();
+      }
     };
     document.addEventListener('mousedown', onPointer);
     document.addEventListener('keydown', onKey);
@@ -42,6 +46,7 @@ export function OrgSwitcher({ currentOrgId, currentOrgName }: { currentOrgId?: s
   return (
     <div ref={rootRef} className="relative">
       <button
+        ref={toggleRef}
         type="button"
         aria-expanded={open}
         aria-controls={menuId}

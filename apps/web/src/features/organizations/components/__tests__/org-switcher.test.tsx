@@ -67,3 +67,17 @@ describe('OrgSwitcher', () => {
     expect(screen.getByText('Workspaces page')).toBeInTheDocument();
   });
 });
+
+describe('OrgSwitcher keyboard use', () => {
+  it('closes on Escape and puts focus back on its button', async () => {
+    server.use(http.get('*/api/organizations', () => HttpResponse.json({ organizations: [larchloaf] })));
+    renderWithProviders(<OrgSwitcher currentOrgId="org_1" currentOrgName="Larchloaf" />);
+    const toggle = screen.getByRole('button', { name: /Larchloaf/ });
+    await userEvent.click(toggle);
+    expect(await screen.findByRole('link', { name: /Larchloaf/ })).toBeInTheDocument();
+    await userEvent.keyboard('{Escape}');
+    expect(screen.queryByRole('link', { name: /Larchloaf/ })).not.toBeInTheDocument();
+    expect(toggle).toHaveFocus();
+    expect(toggle).toHaveAttribute('aria-expanded', 'false');
+  });
+});
