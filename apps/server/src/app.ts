@@ -20,6 +20,12 @@ import { apiNotFound, errorHandler } from './modules/common/error-handler.js';
 import { healthRoutes } from './modules/health/health.routes.js';
 import { mailerCreate, type OutgoingMail } from './modules/mail/mailer.js';
 import { organizationRoutes } from './modules/organization/organization.routes.js';
+import { billingRoutes } from './modules/billing/billing.routes.js';
+import { lowBalanceNotifierCreate } from './modules/billing/billing-notify.js';
+import { billingWebhookHandler } from './modules/billing/billing-webhook.js';
+import { creditsLowBalanceNotifierSet } from './modules/billing/credits.service.js';
+import { stripeClientCreate } from './modules/billing/stripe-client.js';
+import { invitationOrgRoutes, invitationPublicRoutes } from './modules/invitation/invitation.routes.js';
 import { SqliteSessionStore } from './modules/session/session-store.js';
 import { meRoutes } from './modules/user/user.routes.js';
 import { webStaticMount } from './web-static.js';
@@ -53,6 +59,8 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   const mailer = mailerCreate(config.mail, log);
   const sessionStore = new SqliteSessionStore(orm, config.sessionTtlMs);
   const passport = passportCreate(em, config);
+  const stripe = stripeClientCreate(config.billing);
+  creditsLowBalanceNotifierSet(em, lowBalanceNotifierCreate(em, mailer, config.publicUrl, log));
   const pruneTimer = setInterval(() => void sessionStore.prune().catch((err) => log.warn({ err }, 'session prune failed')), 3600_000);
   pruneTimer.unref();
 
@@ -90,6 +98,8 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
     }),
   );
   app.use((_req, _res, next) => RequestContext.create(em, next));
+  // Raw body for the signature check, so this sits before JSON parsing; no session or CSRF (the provider has neither).
+  app.post('/api/billing/webhook', express.raw({ type: '*/*', limit: '1mb' }), billingWebhookHandler({ em, stripe, billing: config.billing, mailer, publicUrl: config.publicUrl, log }));
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
   app.use(
@@ -141,6 +151,9 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   await customerFilesInterrupted(orm);
   const customerFiles = customerFileRoutes({ em, orm, uploadsDir: config.uploadsDir, uploadMaxBytes: config.uploadMaxBytes });
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/customer-files', customerFiles.router);
+  app.use('/api/organizations/:orgId/billing', billingRoutes({ em, stripe, billing: config.billing, publicUrl: config.publicUrl }));
+  app.use('/api/organizations/:orgId/invitations', invitationOrgRoutes({ em, mailer, publicUrl: config.publicUrl }));
+  app.use('/api/invitations', invitationPublicRoutes({ em }));
   app.use('/api/organizations', organizationRoutes(em));
   app.use('/api', apiNotFound());
   const servesWeb = webStaticMount(app, config.webDist);

@@ -46,6 +46,11 @@ const envSchema = z.object({
   RATE_LIMIT_AUTH_PER_MINUTE: z.coerce.number({ message: 'must be a whole number' }).int().min(1, 'must be at least 1').default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   WEB_DIST: z.string().min(1).optional(),
+  STRIPE_SECRET_KEY: z.string().regex(/^(sk|rk)_/, 'must be a secret key starting with sk_ (or a restricted key rk_)').optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_/, 'must be a webhook signing secret starting with whsec_').optional(),
+  STRIPE_API_HOST: z.string().min(1).optional(),
+  STRIPE_API_PORT: portFromEnv(3002),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https'], { message: 'must be http or https' }).optional(),
   UPLOAD_MAX_BYTES: z.coerce.number({ message: 'must be a whole number of bytes' }).int('must be a whole number of bytes').min(1, 'must be at least 1 byte').default(200 * 1024 * 1024),
 });
 
@@ -78,6 +83,19 @@ export interface AppConfig {
   rateLimitAuthPerMinute: number;
   logLevel: string;
   webDist: string;
+  /** Payments through the provider's SDK; outside production it points at the local stand-in (infra/stripe-fake). */
+  billing: {
+    /** False in production until STRIPE_SECRET_KEY is set (billing routes then answer 503). */
+    enabled: boolean;
+    secretKey: string;
+    webhookSecret: string;
+    /** Unset = the SDK's default (the real provider). */
+    apiHost: string | undefined;
+    apiPort: number | undefined;
+    apiProtocol: 'http' | 'https' | undefined;
+    /** True when the API settings point at the local stand-in, which the dev starter then runs. */
+    usesLocalFake: boolean;
+  };
   /** Largest customer-file upload in bytes (UPLOAD_MAX_BYTES, default 200 MB). */
   uploadMaxBytes: number;
   /** Raw customer-file uploads waiting for import: `${DATA_DIR}/uploads`. */
@@ -127,6 +145,9 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
       problems.push({ variable: name, message: 'is required in production once any GOOGLE_* variable is set' });
     }
   }
+  if (production && e.STRIPE_SECRET_KEY && !e.STRIPE_WEBHOOK_SECRET) {
+    problems.push({ variable: 'STRIPE_WEBHOOK_SECRET', message: 'is required in production once STRIPE_SECRET_KEY is set (the webhook signing secret, whsec_…)' });
+  }
   if (problems.length > 0) throw new ConfigError(problems);
 
   const dataDir = resolve(e.DATA_DIR);
@@ -166,6 +187,7 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
     rateLimitAuthPerMinute: e.RATE_LIMIT_AUTH_PER_MINUTE,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     webDist: resolve(e.WEB_DIST ?? join(packageDir, '..', 'web', 'dist')),
+    billing: billingConfig(e, production),
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
     uploadsDir: join(dataDir, 'uploads'),
   };
@@ -179,4 +201,19 @@ function sessionSecretForDevelopment(dataDir: string, nodeEnv: string): string {
   mkdirSync(dirname(file), { recursive: true });
   writeFileSync(file, secret + '\n', { mode: 0o600 });
   return secret;
+}
+
+function billingConfig(e: z.infer<typeof envSchema>, production: boolean): AppConfig['billing'] {
+  const local = !production && !e.STRIPE_API_HOST;
+  const apiHost = e.STRIPE_API_HOST ?? (production ? undefined : 'localhost');
+  const apiProtocol = e.STRIPE_API_PROTOCOL ?? (production ? undefined : 'http');
+  return {
+    enabled: production ? Boolean(e.STRIPE_SECRET_KEY) : true,
+    secretKey: e.STRIPE_SECRET_KEY ?? 'sk_test_demandscape_local',
+    webhookSecret: e.STRIPE_WEBHOOK_SECRET ?? 'whsec_demandscape_local',
+    apiHost,
+    apiPort: apiHost ? e.STRIPE_API_PORT : undefined,
+    apiProtocol,
+    usesLocalFake: local || (!production && (apiHost === 'localhost' || apiHost === '127.0.0.1') && apiProtocol === 'http'),
+  };
 }

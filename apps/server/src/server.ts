@@ -3,6 +3,7 @@ import { createApp } from './app.js';
 import { ConfigError, configFromEnv, type AppConfig } from './config.js';
 import { mailCatcherStart, type MailCatcher } from './dev/mail-catcher.js';
 import { oauthFakeStart, type OAuthFake } from './dev/oauth-fake.js';
+import { stripeFakeLocalStart, type StripeFake } from './dev/stripe-fake.js';
 import { DEMO_PASSWORD, DEMO_USERS, demoSeed } from './seed/demo-seed.js';
 
 // Entry point: read config, start the local stand-ins (development), build the app, seed, listen.
@@ -23,6 +24,7 @@ const config = configOrExit();
 const stops: (() => Promise<void>)[] = [];
 let oauthFake: OAuthFake | undefined;
 let mailCatcher: MailCatcher | undefined;
+let stripeFake: StripeFake | undefined;
 
 if (config.startStandIns) {
   const fakeBase = `http://localhost:${config.oauthFakePort}`;
@@ -45,6 +47,10 @@ if (config.startStandIns) {
   }
 }
 
+if (config.startStandIns && config.billing.usesLocalFake) {
+  stripeFake = await stripeFakeLocalStart(config);
+  if (stripeFake) stops.push(() => stripeFake!.stop());
+}
 const ds = await createApp(config);
 stops.unshift(() => ds.close());
 if (config.demoSeed) await demoSeed(ds.orm.em.fork());
@@ -65,6 +71,7 @@ server.on('listening', () => {
     for (const u of DEMO_USERS) lines.push(`    ${u.role.padEnd(9)} ${u.email}`);
   }
   if (mailCatcher) lines.push(`  mail inbox (local catcher): ${mailCatcher.webUrl}`);
+  if (stripeFake) lines.push(`  payments: local stand-in at ${stripeFake.url} (test card 4242 4242 4242 4242; 4000 0000 0000 0002 is declined)`);
   if (oauthFake) lines.push(`  Google sign-in: local stand-in at ${oauthFake.url} (signs in as ${process.env.OAUTH_FAKE_EMAIL ?? 'owner@larchloaf.example'})`);
   console.log(lines.join('\n') + '\n');
 });

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { passwordHash } from '../modules/auth/password-hash.js';
+import { billingDemoSetup } from '../modules/billing/billing-notify.js';
 import { entityId } from '../modules/common/base.entity.js';
 import { MembershipSchema, type Membership, type Role } from '../modules/organization/membership.entity.js';
 import { OrganizationSchema, type Organization } from '../modules/organization/organization.entity.js';
@@ -59,5 +60,6 @@ export async function demoSeed(em: EntityManager): Promise<{ created: string[]; 
     created.push(`workspace ${DEMO_WORKSPACE.name}`);
   }
   await em.flush();
+  await billingDemoSetup(em, org.id);
   return { created, organizationId: org.id, workspaceId: workspace.id };
 }

@@ -2,6 +2,8 @@ import { Router } from 'express';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { organizationCreate, organizationMembers, organizationRename, organizationsOfUser, organizationView } from './organization.service.js';
 import { organizationNameSchema } from './organization.schemas.js';
+import { memberRemove, memberRoleChange } from './member.service.js';
+import { memberRoleSchema } from './organization.schemas.js';
 import { auditList } from '../audit/audit.service.js';
 import { auditQuerySchema } from '../audit/audit.schemas.js';
 import { requireMembership, requireSession, sessionUser } from '../common/guards.js';
@@ -44,6 +46,15 @@ export function organizationRoutes(em: EntityManager): Router {
     res.json({ members: await organizationMembers(em, req.membership!.organization.id) });
   });
 
+  router.patch('/:orgId/members/:userId', requireMembership(em, PERMISSIONS['members.manage']), async (req, res) => {
+    const { role } = inputParse(memberRoleSchema, req.body);
+    res.json({ member: await memberRoleChange(em, req.membership!.organization, sessionUser(req), String(req.params.userId), role) });
+  });
+
+  router.delete('/:orgId/members/:userId', requireMembership(em, PERMISSIONS['members.manage']), async (req, res) => {
+    await memberRemove(em, req.membership!.organization, sessionUser(req), String(req.params.userId));
+    res.status(204).end();
+  });
   router.get('/:orgId/audit-events', requireMembership(em, PERMISSIONS['audit.read']), async (req, res) => {
     const query = inputParse(auditQuerySchema, req.query);
     res.json(await auditList(em, req.membership!.organization.id, query));

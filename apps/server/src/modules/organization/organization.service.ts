@@ -3,6 +3,8 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { OrganizationSchema, type Organization } from './organization.entity.js';
 import { MembershipSchema, type Membership, type Role } from './membership.entity.js';
 import { auditRecord } from '../audit/audit.service.js';
+import { WELCOME_CREDITS } from '../billing/billing-plans.js';
+import { creditsGrant } from '../billing/credits.service.js';
 import { entityId } from '../common/base.entity.js';
 import type { User } from '../user/user.entity.js';
 
@@ -73,6 +75,7 @@ export async function organizationCreate(em: EntityManager, creator: User, name:
   em.create(MembershipSchema, { id: entityId(), organization: org, user: em.getReference('User', creator.id), role: 'owner' } as Membership);
   auditRecord(em, { action: 'organization.create', organizationId: org.id, actor: creator, target: { type: 'organization', id: org.id }, details: { name } });
   await em.flush();
+  await creditsGrant(em, org.id, WELCOME_CREDITS, 'welcome', 'Welcome credits for a new organization');
   return org;
 }
 
