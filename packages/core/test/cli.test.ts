@@ -229,6 +229,12 @@ describe('demandscape density rejects bad input with a clear message', () => {
     expect(r.stderr).toMatch(message as RegExp);
   });
 
+  it('asks for at least one --output', async () => {
+    const r = await run(['density', '--input', lonLatCsv('ok3.csv', 20)]);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/--output is required: give at least one \.csv, \.tif or \.geojson file/);
+  });
+
   it('names a missing input file and an unknown output extension', async () => {
     const missing = await run(['density', '--input', join(dir, 'nope.csv'), '--output', join(dir, 'o.csv')]);
     expect(missing.code).toBe(1);

@@ -11,7 +11,7 @@ export type OutputKind = 'csv' | 'geotiff' | 'geojson';
 /** Raw option strings as commander hands them over. */
 export interface DensityRawOptions {
   input: string;
-  output: string[];
+  output?: string[];
   planar?: boolean;
   lon?: string;
   lat?: string;
@@ -103,7 +103,8 @@ export function extentParse(raw: string, planar: boolean): Extent {
  */
 export function densityOptions(raw: DensityRawOptions): DensityOptions {
   const planar = raw.planar === true;
-  if (raw.output.length === 0) throw bad('--output', 'is required: give at least one .csv, .tif or .geojson file');
+  const output = raw.output ?? [];
+  if (output.length === 0) throw bad('--output', 'is required: give at least one .csv, .tif or .geojson file');
   if (planar && (raw.lon || raw.lat)) throw bad('--lon/--lat', 'cannot be used with --planar; name the metre columns with --x and --y');
   if (!planar && (raw.x || raw.y)) throw bad('--x/--y', 'need --planar (coordinates already in metres); for degrees use --lon and --lat');
   if (!planar && raw.epsg) throw bad('--epsg', 'applies to --planar input only; lon/lat input is projected to its UTM zone, whose code is written automatically');
@@ -125,7 +126,7 @@ export function densityOptions(raw: DensityRawOptions): DensityOptions {
   }
   return {
     input: raw.input,
-    outputs: raw.output.map((path) => ({ path, kind: outputKind(path) })),
+    outputs: output.map((path) => ({ path, kind: outputKind(path) })),
     planar,
     columns: { a: planar ? raw.x : raw.lon, b: planar ? raw.y : raw.lat, weight: raw.weight },
     kernel: raw.kernel as KernelName,

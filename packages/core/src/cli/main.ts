@@ -34,8 +34,8 @@ the CSV (every bad row is reported, up to 20 listed, nothing is computed).
 Customer locations are personal data: outputs hold surfaces and contours only, never points.
 `;
 
-function collect(value: string, previous: string[]): string[] {
-  return [...previous, value];
+function collect(value: string, previous: string[] | undefined): string[] {
+  return [...(previous ?? []), value];
 }
 
 function program(io: CliIo, result: { code: number }): Command {
@@ -48,7 +48,7 @@ function program(io: CliIo, result: { code: number }): Command {
     .command('density')
     .description('Build a demand surface from a customer CSV and write CSV / GeoTIFF / GeoJSON outputs.')
     .requiredOption('--input <file>', 'customer CSV with a header row')
-    .option('--output <file>', 'output file: .csv, .tif or .geojson (repeatable)', collect, [])
+    .option('--output <file>', 'output file: .csv, .tif or .geojson (repeat for several)', collect)
     .option('--lon <column>', 'longitude column (default: first of lon, lng, long, longitude, x)')
     .option('--lat <column>', 'latitude column (default: first of lat, latitude, y)')
     .option('--planar', 'coordinates are already planar metres: no projection')
