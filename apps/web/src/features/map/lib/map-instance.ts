@@ -1,0 +1,61 @@
+import maplibregl, { type Map as MapLibreMap, type StyleSpecification } from 'maplibre-gl';
+import 'maplibre-gl/dist/maplibre-gl.css';
+
+/**
+ * Everything that needs a real browser (WebGL, canvas) sits in this module, so component tests can
+ * replace it; all map logic around it stays testable.
+ */
+
+/**
+ * Creates the MapLibre map. Offline: attribution of our own demo data only, no external requests.
+ * @param container the element to draw into
+ * @param style a style object or a style URL (production)
+ * @param view initial centre and zoom
+ * @returns the map
+ * @example const map = mapInstanceCreate(div, demoBasemapStyle(basemap), { center: [-38.5, 44.5], zoom: 11 });
+ */
+export function mapInstanceCreate(container: HTMLElement, style: StyleSpecification | string, view: { center: [number, number]; zoom: number }): MapLibreMap {
+  return new maplibregl.Map({
+    container,
+    style,
+    center: view.center,
+    zoom: view.zoom,
+    attributionControl: false,
+    dragRotate: false,
+    pitchWithRotate: false,
+    cooperativeGestures: false,
+  });
+}
+
+/**
+ * Places an HTML element on the map (district names without glyph files).
+ * @param element the label element
+ * @param lngLat where it goes
+ * @param map the map
+ * @returns a function that removes it
+ * @example const remove = markerAdd(span, [-38.5, 44.5], map);
+ */
+export function markerAdd(element: HTMLElement, lngLat: [number, number], map: MapLibreMap): () => void {
+  const marker = new maplibregl.Marker({ element, anchor: 'center' }).setLngLat(lngLat).addTo(map);
+  return () => marker.remove();
+}
+
+/**
+ * Paints RGBA bytes on a canvas and returns it as a PNG data URL for an image source.
+ * @param rgba 4 bytes per pixel, row 0 at the top
+ * @param width pixels
+ * @param height pixels
+ * @returns a `data:image/png` URL
+ * @example imageUrlFromRgba(rasterRgba(values, table, scale), raster.width, raster.height)
+ */
+export function imageUrlFromRgba(rgba: Uint8ClampedArray, width: number, height: number): string {
+  const canvas = document.createElement('canvas');
+  canvas.width = width;
+  canvas.height = height;
+  const context = canvas.getContext('2d');
+  if (!context) throw new Error('This browser cannot draw on a canvas, so the demand surface cannot be shown. Try a current Chrome, Firefox or Safari.');
+  const image = context.createImageData(width, height);
+  image.data.set(rgba);
+  context.putImageData(image, 0, 0);
+  return canvas.toDataURL('image/png');
+}

@@ -1,0 +1,20 @@
+import type { AreaUnit, WeightKind } from './utils/density-unit';
+
+/** A percent-volume level as the API reports it on a surface (threshold per km²). */
+export type SurfaceThreshold = { percent: number; threshold: number; areaKm2: number; clipped: boolean };
+
+/** The fields of a demand surface (`GET …/surfaces/:id`) the map reads; the full API object fits. */
+export type MapSurface = {
+  id: string;
+  name: string;
+  status: 'queued' | 'running' | 'succeeded' | 'failed' | 'cancelled';
+  customerFileId: string | null;
+  params: { unit: AreaUnit };
+  thresholds: SurfaceThreshold[] | null;
+};
+
+/** The fields of the surface's customer file the legend needs (`GET …/customer-files/:id`). */
+export type MapCustomerFile = { id: string; name: string; weightKind: WeightKind; weightLabel: string | null };
+
+/** Where the map's requests go: the organization and workspace of the study. */
+export type MapScope = { orgId: string; workspaceId: string };
