@@ -60,6 +60,19 @@ describe('apiRequest', () => {
     expect(error).toMatchObject({ status: 400, code: 'VALIDATION_FAILED', field: 'name', message: 'Name is required.' });
   });
 
+  it('keeps machine-readable details such as a suggested cell size', async () => {
+    server.use(
+      http.post('*/api/things', () =>
+        HttpResponse.json(
+          { error: { code: 'GRID_TOO_LARGE', message: 'Use at least 75 m.', field: 'cellSize', details: { suggestedCellSize: 75 } } },
+          { status: 400 },
+        ),
+      ),
+    );
+    const error = await api.post('/things', {}).catch((e: unknown) => e);
+    expect(error).toMatchObject({ code: 'GRID_TOO_LARGE', details: { suggestedCellSize: 75 } });
+  });
+
   it('explains an error response that is not in the API shape', async () => {
     server.use(http.get('*/api/things', () => new HttpResponse('<html>Bad gateway</html>', { status: 502 })));
     const error = await api.get('/things').catch((e: unknown) => e);

@@ -59,8 +59,8 @@ async function errorFrom(response: Response): Promise<ApiError> {
     parsed = null;
   }
   if (isApiErrorBody(parsed)) {
-    const { code, message, field, fields } = parsed.error;
-    return new ApiError(response.status, code, message, field, fields);
+    const { code, message, field, fields, details } = parsed.error;
+    return new ApiError(response.status, code, message, field, fields, details);
   }
   return new ApiError(
     response.status,

@@ -1,6 +1,6 @@
 /** The `{ error }` body every failed API call returns. */
 export type ApiErrorBody = {
-  error: { code: string; message: string; field?: string; fields?: Record<string, string> };
+  error: { code: string; message: string; field?: string; fields?: Record<string, string>; details?: Record<string, unknown> };
 };
 
 /**
@@ -14,14 +14,24 @@ export class ApiError extends Error {
   readonly code: string;
   readonly field?: string;
   readonly fields?: Record<string, string>;
+  /** Machine-readable extras some errors carry, e.g. `suggestedCellSize` with GRID_TOO_LARGE. */
+  readonly details?: Record<string, unknown>;
 
-  constructor(status: number, code: string, message: string, field?: string, fields?: Record<string, string>) {
+  constructor(
+    status: number,
+    code: string,
+    message: string,
+    field?: string,
+    fields?: Record<string, string>,
+    details?: Record<string, unknown>,
+  ) {
     super(message);
     this.name = 'ApiError';
     this.status = status;
     this.code = code;
     this.field = field;
     this.fields = fields;
+    this.details = details;
   }
 }
 
