@@ -44,6 +44,14 @@ const MATRIX: RouteRow[] = [
   { method: 'GET', route: WS, allowed: ROLES_ALL, ok: 200 },
   { method: 'PATCH', route: WS, body: { description: 'Edited in the matrix' }, allowed: ['owner', 'analyst', 'planner'], ok: 200 },
   { method: 'DELETE', route: WS, allowed: ['owner', 'analyst'], ok: 204, fresh: true },
+  { method: 'GET', route: `${ORG}/billing`, allowed: ['owner'], ok: 200 },
+  { method: 'GET', route: `${ORG}/billing/ledger`, allowed: ['owner'], ok: 200 },
+  { method: 'GET', route: `${ORG}/billing/receipts`, allowed: ['owner'], ok: 200 },
+  { method: 'POST', route: `${ORG}/billing/seats`, body: { seats: 0 }, allowed: ['owner'], ok: 400 },
+  { method: 'GET', route: `${ORG}/invitations`, allowed: ['owner'], ok: 200 },
+  { method: 'POST', route: `${ORG}/invitations`, body: { email: 'not-an-address', role: 'analyst' }, allowed: ['owner'], ok: 400 },
+  { method: 'PATCH', route: `${ORG}/members/no-such-user`, body: { role: 'planner' }, allowed: ['owner'], ok: 404 },
+  { method: 'DELETE', route: `${ORG}/members/no-such-user`, allowed: ['owner'], ok: 404 },
 ];
 
 function expectedStatus(row: RouteRow, caller: Caller): number {

@@ -140,7 +140,7 @@ export async function billingEventApply(deps: WebhookDeps, event: Stripe.Event):
     }
     return 'applied';
   });
-  for (const mail of mails) void deps.mailer.send(mail);
+  for (const mail of mails) await deps.mailer.send(mail);
   return outcome;
 }
 

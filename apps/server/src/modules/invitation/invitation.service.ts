@@ -69,7 +69,7 @@ async function tokenIssue(deps: InvitationDeps, inv: Invitation, org: Organizati
   inv.expiresAt = new Date(Date.now() + INVITATION_TTL_MS);
   const link = `${deps.publicUrl}/invitations/accept?token=${token}`;
   await deps.em.flush();
-  void deps.mailer.send(invitationMail(inv.email, org.name, inviter.name, inv.role, link, inv.expiresAt));
+  await deps.mailer.send(invitationMail(inv.email, org.name, inviter.name, inv.role, link, inv.expiresAt));
 }
 
 /**
