@@ -1,8 +1,11 @@
+import express from 'express';
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DemandscapeApp } from '../src/app.js';
 import { entityId } from '../src/modules/common/base.entity.js';
 import { creditsBalance, creditsCharge, creditsGrant, creditsLedger, creditsPurchase, creditsRelease, creditsReserve } from '../src/modules/billing/credits.service.js';
 import { InsufficientCreditsError } from '../src/modules/billing/credits.errors.js';
+import { AppError } from '../src/modules/common/errors.js';
 import { OrganizationSchema } from '../src/modules/organization/organization.entity.js';
 import { testAppCreate } from './utils.js';
 
@@ -40,6 +43,33 @@ describe('credits ledger', () => {
     const { entries } = await creditsLedger(ds.orm.em.fork(), orgId, { limit: 200 });
     expect(entries.filter((e) => e.kind === 'reservation')).toHaveLength(5);
     expect(Math.min(...entries.map((e) => e.balanceAfter))).toBe(0);
+  });
+
+  it('accepts exactly 5 of 20 parallel HTTP reservation requests (test-only route, one forked entity manager per request)', async () => {
+    const orgId = await orgFresh();
+    await creditsGrant(ds.orm.em.fork(), orgId, 60, 'test', 'test credits');
+    // Test-only app: the surface route is where production reserves credits; this isolates the ledger.
+    const app = express();
+    app.post('/reserve/:ref', async (req, res) => {
+      try {
+        res.status(201).json(await creditsReserve(ds.orm.em.fork(), orgId, 12, String(req.params.ref)));
+      } catch (err) {
+        const known = err as AppError;
+        res.status(known.status ?? 500).json({ error: known.toBody?.() ?? { message: String(err) } });
+      }
+    });
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    try {
+      const responses = await Promise.all(Array.from({ length: 20 }, (_, i) => request(server).post(`/reserve/http-run-${i}`)));
+      const statuses = responses.map((r) => r.status).sort();
+      expect(statuses.filter((s) => s === 201)).toHaveLength(5);
+      expect(statuses.filter((s) => s === 402)).toHaveLength(15);
+      expect(responses.find((r) => r.status === 402)!.body.error).toMatchObject({ code: 'INSUFFICIENT_CREDITS', details: { balance: 0, cost: 12 } });
+      expect(await creditsBalance(ds.orm.em.fork(), orgId)).toBe(0);
+    } finally {
+      await new Promise((resolve) => server.close(resolve));
+    }
   });
 
   it('says what the run costs and what the balance is when credits do not cover it', async () => {
