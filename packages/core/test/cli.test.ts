@@ -221,12 +221,28 @@ describe('demandscape density rejects bad input with a clear message', () => {
     [['--extent', '1,2,3'], /--extent must be four numbers/],
     [['--method', 'fast'], /--method must be exact, binned or auto/],
     [['--x', 'e'], /--x\/--y need --planar/],
+    [['--projection', 'mercator'], /--projection must be utm or laea/],
     [['--cell-size', '1', '--max-cells', '1000'], /exceeds the 1,000-cell limit; a cell size of .* or more fits/],
   ])('%j', async (extra, message) => {
     const input = lonLatCsv('ok.csv', 200);
     const r = await run(['density', '--input', input, '--output', join(dir, 'o.csv'), ...(extra as string[])]);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(message as RegExp);
+  });
+
+  it('suggests --projection laea for data wider than a UTM zone, and laea then works', async () => {
+    const wide = join(dir, 'wide.csv');
+    writeFileSync(wide, 'lon,lat\n-44,44.5\n-38.5,44.6\n-33,44.4\n');
+    const utm = await run(['density', '--input', wide, '--bandwidth', '20000', '--output', join(dir, 'w.tif')]);
+    expect(utm.code).toBe(1);
+    expect(utm.stderr).toMatch(/more than 4\.5° would distort distances .*\(on the command line: --projection laea\)/);
+    const tif = join(dir, 'wide.tif');
+    const laea = await run(['density', '--input', wide, '--projection', 'laea', '--bandwidth', '20000', '--output', tif]);
+    expect(laea.code).toBe(0);
+    expect(laea.stderr).toMatch(/Lambert azimuthal equal-area/);
+    const image = await (await fromArrayBuffer(new Uint8Array(readFileSync(tif)).buffer)).getImage();
+    expect(image.getGeoKeys()?.ProjectedCSTypeGeoKey).toBe(32767);
+    expect(image.getGeoKeys()?.GTCitationGeoKey).toMatch(/CRS \+proj=laea/);
   });
 
   it('asks for at least one --output', async () => {

@@ -22,6 +22,8 @@ export interface CliSurface {
   convert?: CentreConvert;
   epsg?: number;
   crs: string;
+  /** proj4 string of a CRS with no EPSG code (LAEA), kept in the GeoTIFF citation. */
+  proj4?: string;
 }
 
 /**
@@ -39,12 +41,24 @@ export function surfaceWrite(path: string, kind: OutputKind, s: CliSurface): voi
   try {
     if (kind === 'csv') densityCsvWrite(path, surface.intensity, grid, s.convert);
     else if (kind === 'geotiff') {
-      const citation = `Demandscape ${surface.stats.kernel} demand surface, weight per km2`;
+      const citation = `Demandscape ${surface.stats.kernel} demand surface, weight per km2${s.proj4 ? `; CRS ${s.proj4}` : ''}`;
       writeFileSync(path, new Uint8Array(geotiffFromGrid(surface.intensity, grid, { epsg: s.epsg, citation })));
     } else writeFileSync(path, `${JSON.stringify(s.contours.geojson)}\n`);
   } catch (e) {
     if (e instanceof CoreError) throw e;
     throw new CoreError('INVALID_ARGUMENT', `cannot write --output ${path}: ${(e as Error).message}`, '--output');
+  }
+}
+
+/** The engine names its option 'projection'; on the command line it is the --projection flag. */
+function lonLatRun<T>(run: () => T): T {
+  try {
+    return run();
+  } catch (e) {
+    if (e instanceof CoreError && e.code === 'PROJECTION_SPAN') {
+      throw new CoreError(e.code, `${e.message} (on the command line: --projection laea)`, '--projection', e.details);
+    }
+    throw e;
   }
 }
 
@@ -97,7 +111,7 @@ export function densityCommand(opts: DensityOptions, io: CliIo): number {
       crs: opts.epsg ? `planar metres (EPSG:${opts.epsg})` : 'planar metres (no EPSG code given)',
     };
   } else {
-    const r = densityFromLonLat(csv.a, csv.b, csv.w, { ...common, extent: opts.extent });
+    const r = lonLatRun(() => densityFromLonLat(csv.a, csv.b, csv.w, { ...common, extent: opts.extent, projection: opts.projection }));
     s = {
       result: r,
       contours: r.contours,
@@ -107,6 +121,7 @@ export function densityCommand(opts: DensityOptions, io: CliIo): number {
       },
       epsg: r.projection.epsg ?? undefined,
       crs: r.projection.label,
+      proj4: r.projection.epsg === null ? r.projection.proj4 : undefined,
     };
   }
   progress.done();

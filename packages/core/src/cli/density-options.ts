@@ -25,6 +25,7 @@ export interface DensityRawOptions {
   method: string;
   maxCells?: string;
   epsg?: string;
+  projection?: string;
 }
 
 /** Checked options for the density command. */
@@ -41,6 +42,7 @@ export interface DensityOptions {
   method: 'exact' | 'binned' | 'auto';
   maxCells?: number;
   epsg?: number;
+  projection: 'utm' | 'laea';
 }
 
 function bad(flag: string, message: string): CoreError {
@@ -108,6 +110,9 @@ export function densityOptions(raw: DensityRawOptions): DensityOptions {
   if (planar && (raw.lon || raw.lat)) throw bad('--lon/--lat', 'cannot be used with --planar; name the metre columns with --x and --y');
   if (!planar && (raw.x || raw.y)) throw bad('--x/--y', 'need --planar (coordinates already in metres); for degrees use --lon and --lat');
   if (!planar && raw.epsg) throw bad('--epsg', 'applies to --planar input only; lon/lat input is projected to its UTM zone, whose code is written automatically');
+  const projection = raw.projection ?? 'utm';
+  if (projection !== 'utm' && projection !== 'laea') throw bad('--projection', `must be utm or laea (got "${projection}")`);
+  if (planar && raw.projection) throw bad('--projection', 'applies to lon/lat input only; --planar coordinates are already projected');
   if (!(KERNEL_NAMES as readonly string[]).includes(raw.kernel)) throw bad('--kernel', `must be one of ${KERNEL_NAMES.join(', ')} (got "${raw.kernel}")`);
   let bandwidth: number | CliBandwidthRule;
   if ((BANDWIDTH_RULES as readonly string[]).includes(raw.bandwidth)) bandwidth = raw.bandwidth as CliBandwidthRule;
@@ -136,5 +141,6 @@ export function densityOptions(raw: DensityRawOptions): DensityOptions {
     method: raw.method as DensityOptions['method'],
     maxCells,
     epsg,
+    projection,
   };
 }

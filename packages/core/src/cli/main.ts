@@ -24,8 +24,9 @@ Bandwidth convention:
 Output (chosen by extension, --output may be repeated):
   .csv      x,y,density — one row per cell centre, in the input's units (lon/lat degrees, or
             metres with --planar), density = weighted points per km²
-  .tif      GeoTIFF, float32, north-up, in the projected CRS (UTM zone EPSG code; with
-            --planar the --epsg code if given, else a user-defined metric plane)
+  .tif      GeoTIFF, float32, north-up, in the projected CRS (UTM zone EPSG code; laea and
+            --planar without --epsg are user-defined planes, the laea proj4 string is kept
+            in the citation)
   .geojson  percent-volume contours 50 %, 75 %, 90 % (lon/lat; metres with --planar), with
             properties percent and threshold (per km²)
 
@@ -62,6 +63,7 @@ function program(io: CliIo, result: { code: number }): Command {
     .option('--method <name>', 'exact, binned or auto (auto picks by cost and accuracy)', 'auto')
     .option('--max-cells <n>', 'largest grid allowed (default 4,000,000 cells)')
     .option('--epsg <code>', 'with --planar: EPSG code of the metric CRS, written into the GeoTIFF')
+    .option('--projection <name>', 'lon/lat input: utm (default: the UTM zone of the data) or laea (equal-area centred on the data, for regions wider than a UTM zone allows or near the poles)')
     .addHelpText('after', BANDWIDTH_HELP)
     .action((raw: DensityRawOptions) => {
       result.code = densityCommand(densityOptions(raw), io);

@@ -1,6 +1,6 @@
 import { pointsFromLonLat } from '../points/points-from-lon-lat.js';
 import { pointsProject } from '../points/points-project.js';
-import type { LocalProjection } from '../projection/projection-for-lon-lat.js';
+import type { LocalProjection, ProjectionKind } from '../projection/projection-for-lon-lat.js';
 import { projectionConverter, type ProjectionConverter } from '../projection/projection-transform.js';
 import type { Extent } from '../types.js';
 import { densityContours, type DensityContours } from './density-contours.js';
@@ -10,8 +10,10 @@ import { densityFromPlanar, type DensityPipelineOptions, type DensityPlanarResul
 export interface DensityLonLatOptions extends Omit<DensityPipelineOptions, 'extent'> {
   /** Study extent in WGS84 degrees: minX = west, minY = south, maxX = east, maxY = north. */
   extent?: Extent;
-  /** Percent-volume contour levels, each in (0, 100); default 50, 75, 90. */
+  /** Percent-volume contour levels, each in (0, 100]; default 50, 75, 90. */
   percents?: number[];
+  /** 'utm' (default: the UTM zone of the data) or 'laea' (equal-area centred on the data, for wide or polar data). */
+  projection?: ProjectionKind;
 }
 
 /** Everything a density job needs to store or show, with the projection to place it. */
@@ -68,7 +70,7 @@ export function extentProject(extent: Extent, converter: ProjectionConverter): E
  * @param lon longitudes, degrees
  * @param lat latitudes, degrees
  * @param weight optional weights ≥ 0 (default 1 per customer)
- * @param options kernel, bandwidth (metres or rule), cell size, extent (degrees), method, cell limit, percents, signal, progress
+ * @param options kernel, bandwidth (metres or rule), cell size, extent (degrees), method, cell limit, percents, projection, signal, progress
  * @returns projection (EPSG, proj4), grid, surface (intensity and share per km², stats), bandwidth and cell size with explanations, contours
  * @throws CoreError for bad points, bandwidth, extent, grid size or projection span
  * @example
@@ -83,7 +85,7 @@ export function densityFromLonLat(
   options: DensityLonLatOptions = {},
 ): DensityLonLatResult {
   const valid = pointsFromLonLat(lon, lat, weight);
-  const { points, projection } = pointsProject(valid);
+  const { points, projection } = pointsProject(valid, { projection: options.projection });
   const converter = projectionConverter(projection);
   const extent = options.extent ? extentProject(options.extent, converter) : undefined;
   const planar = densityFromPlanar(points, { ...options, extent });
