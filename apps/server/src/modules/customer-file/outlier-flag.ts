@@ -51,19 +51,26 @@ export function haversineM(lon1: number, lat1: number, lon2: number, lat2: numbe
 export function weightedMedian(values: Float64Array, weights: Float64Array): number {
   const n = values.length;
   if (n === 0) return NaN;
-  const order = new Uint32Array(n);
-  for (let i = 0; i < n; i++) order[i] = i;
-  order.sort((a, b) => values[a] - values[b]);
+  // Native sort of the values, then a binary search for the smallest sorted value whose
+  // cumulative weight (all values ≤ it) reaches half: O(n log n) with no comparator calls.
+  const sorted = Float64Array.from(values).sort();
   let total = 0;
   for (let i = 0; i < n; i++) total += weights[i];
   const useWeights = total > 0;
   const half = (useWeights ? total : n) / 2;
-  let acc = 0;
-  for (let k = 0; k < n; k++) {
-    acc += useWeights ? weights[order[k]] : 1;
-    if (acc >= half) return values[order[k]];
+  const weightUpTo = (limit: number) => {
+    let acc = 0;
+    for (let i = 0; i < n; i++) if (values[i] <= limit) acc += useWeights ? weights[i] : 1;
+    return acc;
+  };
+  let lo = 0;
+  let hi = n - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (weightUpTo(sorted[mid]) >= half) hi = mid;
+    else lo = mid + 1;
   }
-  return values[order[n - 1]];
+  return sorted[lo];
 }
 
 /**

@@ -1,6 +1,5 @@
 import { createReadStream } from 'node:fs';
 import { Transform } from 'node:stream';
-import { pipeline } from 'node:stream/promises';
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import { textDecoderLabel } from './file-sniff.js';
@@ -34,7 +33,7 @@ export async function rowsRead(path: string, options: RowSourceOptions, onRow: R
   return csvRowsRead(path, options, onRow);
 }
 
-async function csvRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
+function csvRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
   const decoder = new TextDecoder(textDecoderLabel(options.encoding ?? 'utf-8'));
   const decode = new Transform({
     // Strings go to the parser as they are (object mode), never split inside a character.
@@ -48,36 +47,40 @@ async function csvRowsRead(path: string, options: RowSourceOptions, onRow: RowCa
       done(null, text === '' ? undefined : text);
     },
   });
-  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, {
-    delimiter: options.delimiter ?? '',
-    header: false,
-    skipEmptyLines: 'greedy',
-  }) as unknown as NodeJS.ReadWriteStream & { destroy(error?: Error): void };
   const file = createReadStream(path, { highWaterMark: 1 << 20 });
-  let stopped = false;
-  const rows = new Transform({
-    writableObjectMode: true,
-    transform(fields: string[], _enc, done) {
-      if (!stopped && onRow(fields) === false) {
-        stopped = true;
-        done(new StopReading());
-        return;
-      }
-      done();
-    },
+  return new Promise<void>((resolve, reject) => {
+    let settled = false;
+    const finish = (err?: Error) => {
+      if (settled) return;
+      settled = true;
+      if (err) reject(err);
+      else resolve();
+    };
+    file.on('error', finish);
+    decode.on('error', finish);
+    file.pipe(decode);
+    // papaparse reads a Node readable stream chunk by chunk; each chunk's rows arrive together and
+    // are handled synchronously, so at most one chunk waits in its queue.
+    Papa.parse(decode as unknown as File, {
+      delimiter: options.delimiter ?? '',
+      header: false,
+      // 'greedy' would join every row to test it; blank-looking rows are skipped below instead.
+      skipEmptyLines: true,
+      chunk(results: Papa.ParseResult<string[]>, parser: Papa.Parser) {
+        for (const fields of results.data) {
+          if (fields[0].trim() === '' && fields.every((f) => f.trim() === '')) continue;
+          if (onRow(fields) === false) {
+            parser.abort();
+            file.destroy();
+            finish();
+            return;
+          }
+        }
+      },
+      complete: () => finish(),
+      error: (err: Error) => finish(err),
+    });
   });
-  rows.resume();
-  try {
-    await pipeline(file, decode, parser, rows);
-  } catch (err) {
-    if (!(err instanceof StopReading)) throw err;
-  }
-}
-
-class StopReading extends Error {
-  constructor() {
-    super('stopped reading');
-  }
 }
 
 async function xlsxRowsRead(path: string, onRow: RowCallback): Promise<void> {
