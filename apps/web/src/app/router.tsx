@@ -52,6 +52,11 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           ErrorBoundary: RouteError,
         },
         {
+          path: paths.invitationAccept.path,
+          lazy: () => import('./routes/invitations/accept').then(load),
+          ErrorBoundary: RouteError,
+        },
+        {
           path: paths.home.path,
           lazy: () => import('./routes/app/root').then(load),
           ErrorBoundary: RouteError,
@@ -69,6 +74,7 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: paths.org.workspace.path, lazy: () => import('./routes/org/workspace').then(load), ErrorBoundary: RouteError },
                 { path: paths.org.members.path, lazy: () => import('./routes/org/members').then(load), ErrorBoundary: RouteError },
                 { path: paths.org.auditLog.path, lazy: () => import('./routes/org/audit-log').then(load), ErrorBoundary: RouteError },
+                { path: paths.org.billing.path, lazy: () => import('./routes/org/billing').then(load), ErrorBoundary: RouteError },
               ],
             },
           ],

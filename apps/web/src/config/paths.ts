@@ -18,6 +18,10 @@ export const paths = {
     google: { getHref: () => '/api/auth/google' },
   },
   welcome: { path: '/welcome', getHref: () => '/welcome' },
+  invitationAccept: {
+    path: '/invitations/accept',
+    getHref: (token: string) => `/invitations/accept?token=${encodeURIComponent(token)}`,
+  },
   account: { path: '/account', getHref: () => '/account' },
   org: {
     root: { path: '/orgs/:orgId', getHref: (orgId: string) => `/orgs/${orgId}` },
@@ -28,6 +32,7 @@ export const paths = {
     },
     members: { path: 'members', getHref: (orgId: string) => `/orgs/${orgId}/members` },
     auditLog: { path: 'audit-log', getHref: (orgId: string) => `/orgs/${orgId}/audit-log` },
+    billing: { path: 'billing', getHref: (orgId: string) => `/orgs/${orgId}/billing` },
   },
 } as const;
 

@@ -4,6 +4,10 @@ import type { Role } from '../types/api';
 const permissionRoles = {
   'audit-log:read': ['owner'],
   'organization:rename': ['owner'],
+  /** Plan, seats, credit purchases, ledger and receipts. */
+  'billing:manage': ['owner'],
+  /** Invite people, change roles, remove members. */
+  'members:manage': ['owner'],
   'members:read': ['owner', 'analyst', 'planner', 'executive'],
   'workspace:read': ['owner', 'analyst', 'planner', 'executive'],
   'workspace:create': ['owner', 'analyst', 'planner'],

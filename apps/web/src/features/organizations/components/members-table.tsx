@@ -1,16 +1,24 @@
 import { Alert, Badge, Card, CardHeader, EmptyState, Spinner } from '@demandscape/ui';
+import type { ReactNode } from 'react';
 import { errorMessage } from '../../../lib/api-error';
 import { roleLabels } from '../../../lib/authorization';
 import { dateText } from '../../../lib/format';
+import type { Member } from '../../../types/api';
 import { useMembers } from '../api/get-members';
 
+export type MembersTableProps = {
+  orgId: string;
+  /** Renders the loaded members instead of the read-only table (the members page passes an editable one for owners). */
+  renderMembers?: (members: Member[]) => ReactNode;
+};
+
 /**
- * Everyone in the organization with their role; read-only until invitations and role changes arrive.
- * @param props the organization
+ * Everyone in the organization with their role, read-only unless `renderMembers` supplies another view.
+ * @param props the organization and an optional renderer for the loaded members
  * @returns a card with the table, or its loading, error or empty state
  * @example <MembersTable orgId={orgId} />
  */
-export function MembersTable({ orgId }: { orgId: string }) {
+export function MembersTable({ orgId, renderMembers }: MembersTableProps) {
   const members = useMembers(orgId);
   return (
     <Card>
@@ -27,7 +35,8 @@ export function MembersTable({ orgId }: { orgId: string }) {
         </div>
       ) : null}
       {members.data?.length === 0 ? <EmptyState title="No members">This organization has no members.</EmptyState> : null}
-      {members.data && members.data.length > 0 ? (
+      {members.data && members.data.length > 0 && renderMembers ? renderMembers(members.data) : null}
+      {members.data && members.data.length > 0 && !renderMembers ? (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-line text-xs text-ink-muted">

@@ -1,0 +1,27 @@
+import type { CreditEntryKind, LedgerEntry } from '../types';
+
+/** Plain words for each ledger entry kind. */
+export const ledgerKindLabels: Record<CreditEntryKind, string> = {
+  purchase: 'Purchase',
+  grant: 'Grant',
+  reservation: 'Reserved for a run',
+  charge: 'Run finished (charged)',
+  release: 'Run stopped (returned)',
+};
+
+/**
+ * What a ledger entry is about, in words: the pack bought, the grant's reason, or the demand
+ * surface run (its id; the run name lives with the workspace).
+ * @param entry the ledger entry
+ * @returns e.g. "Pack pack-500", "Welcome credits", "Demand surface run srf_12ab"
+ * @example ledgerReferenceText({ kind: 'grant', ref: 'welcome', details: { reason: 'Welcome credits' } } as LedgerEntry)
+ */
+export function ledgerReferenceText(entry: Pick<LedgerEntry, 'kind' | 'ref' | 'details'>): string {
+  const details = entry.details ?? {};
+  if (typeof details.reason === 'string' && details.reason) return details.reason;
+  if (typeof details.name === 'string' && details.name) return details.name;
+  if (entry.kind === 'purchase' && typeof details.pack === 'string') return `Credit pack ${details.pack}`;
+  const surface = /^surface:([^:]+)/.exec(entry.ref);
+  if (surface) return `Demand surface run ${surface[1]}`;
+  return entry.ref;
+}
