@@ -24,4 +24,10 @@ describe('roleCan', () => {
   it('allows nothing without a role', () => {
     expect(roleCan(undefined, 'workspace:read')).toBe(false);
   });
+
+  it('lets owners and analysts upload customer files and build surfaces, nobody else', () => {
+    const roles = ['owner', 'analyst', 'planner', 'executive'] as const;
+    expect(roles.filter((r) => roleCan(r, 'customerFile:write'))).toEqual(['owner', 'analyst']);
+    expect(roles.filter((r) => roleCan(r, 'surface:write'))).toEqual(['owner', 'analyst']);
+  });
 });

@@ -15,6 +15,10 @@ const permissionRoles = {
   'workspace:delete': ['owner', 'analyst'],
   /** Aggregated customer bins on the map (never single points); executives and planners see surfaces only. */
   'customerPoints:read': ['owner', 'analyst'],
+  /** Upload, map, import and delete customer files; download rejected rows. */
+  'customerFile:write': ['owner', 'analyst'],
+  /** Build demand surfaces (spends credits), cancel, retry and delete runs. */
+  'surface:write': ['owner', 'analyst'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionRoles;

@@ -28,33 +28,71 @@ export const studySteps = [
   },
 ] as const;
 
+export type StudyStepKey = (typeof studySteps)[number]['key'];
+
+/** A step's state as the page knows it from its data, e.g. `{ label: 'Imported', tone: 'success' }`. */
+export type StudyStepState = { label: string; tone?: 'neutral' | 'accent' | 'success' | 'caution' | 'danger'; detail?: string };
+
+export type StudyOutlineProps = {
+  /** States of the steps that have data; the others show "Not started". */
+  states?: Partial<Record<StudyStepKey, StudyStepState>>;
+  /** The step whose panel is open. */
+  activeKey?: StudyStepKey;
+  /** Steps that can be opened; without it no step is a button. */
+  onSelect?: (key: StudyStepKey) => void;
+  /** Which steps `onSelect` applies to (the ones whose features exist). */
+  selectable?: readonly StudyStepKey[];
+};
+
 /**
- * The study's four steps and the state of each. Every step is "not started" until its feature
- * exists and has data; nothing here is invented.
+ * The study's four steps and the state of each. A step is "not started" until the page reports a
+ * state from real data; nothing here is invented.
+ * @param props step states, the open step and the handler that opens one
  * @returns an ordered list
- * @example <StudyOutline />
+ * @example <StudyOutline states={{ customers: { label: 'Imported', tone: 'success' } }} activeKey="customers" onSelect={open} selectable={['customers', 'surface']} />
  */
-export function StudyOutline() {
+export function StudyOutline({ states = {}, activeKey, onSelect, selectable = [] }: StudyOutlineProps = {}) {
   return (
     <ol className="flex flex-col gap-1" aria-label="Study steps">
-      {studySteps.map((step, index) => (
-        <li key={step.key} className="flex gap-3 rounded-control p-3">
+      {studySteps.map((step, index) => {
+        const state = states[step.key];
+        const canOpen = onSelect !== undefined && selectable.includes(step.key);
+        const active = activeKey === step.key;
+        const body = (
+          <>
           <span
             aria-hidden="true"
-            className="flex size-7 shrink-0 items-center justify-center rounded-full border border-line-strong text-xs font-semibold text-ink-muted"
+            className={`flex size-7 shrink-0 items-center justify-center rounded-full border text-xs font-semibold ${active ? 'border-accent bg-accent text-on-accent' : 'border-line-strong text-ink-muted'}`}
           >
             {index + 1}
           </span>
           <div className="min-w-0 flex-1">
             <div className="flex items-center justify-between gap-2">
               <h3 className="text-sm font-semibold text-ink">{step.title}</h3>
-              <Badge>Not started</Badge>
+              <Badge tone={state?.tone}>{state?.label ?? 'Not started'}</Badge>
             </div>
-            <p className="mt-1 text-xs text-ink-muted">{step.summary}</p>
+            <p className="mt-1 text-xs text-ink-muted">{state?.detail ?? step.summary}</p>
             <p className="mt-1 text-xs text-ink-faint">{step.by}</p>
           </div>
-        </li>
-      ))}
+          </>
+        );
+        return (
+          <li key={step.key}>
+            {canOpen ? (
+              <button
+                type="button"
+                onClick={() => onSelect(step.key)}
+                aria-current={active ? 'step' : undefined}
+                className={`flex w-full gap-3 rounded-control p-3 text-left hover:bg-sunken ${active ? 'bg-accent-soft' : ''}`}
+              >
+                {body}
+              </button>
+            ) : (
+              <div className="flex gap-3 rounded-control p-3">{body}</div>
+            )}
+          </li>
+        );
+      })}
     </ol>
   );
 }
