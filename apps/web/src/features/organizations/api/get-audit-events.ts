@@ -4,7 +4,7 @@ import type { AuditEvent } from '../../../types/api';
 
 export const AUDIT_PAGE_SIZE = 50;
 
-/** Actions the server records today, for the filter (contract v1). */
+/** Actions the server records (apps/server `AUDIT_ACTIONS`), for the filter; the server rejects any other. */
 export const auditActions = [
   'auth.sign_in',
   'auth.sign_in_failed',
@@ -16,9 +16,27 @@ export const auditActions = [
   'workspace.create',
   'workspace.update',
   'workspace.delete',
+  'customer_file.upload',
+  'customer_file.import',
+  'customer_file.delete',
+  'customer_file.rejected_download',
+  'surface.create',
+  'surface.cancel',
+  'surface.retry',
+  'surface.delete',
+  'billing.checkout',
+  'billing.purchase',
+  'billing.seats_change',
+  'invitation.create',
+  'invitation.revoke',
+  'invitation.resend',
+  'invitation.accept',
+  'member.role_change',
+  'member.remove',
 ] as const;
 
-export type AuditEventsPage = { events: AuditEvent[]; nextBefore: string | null };
+/** `nextBefore` is the id of the oldest event shown (the server sends an integer). */
+export type AuditEventsPage = { events: AuditEvent[]; nextBefore: string | number | null };
 
 /**
  * One page of an organization's audit log, newest first.
@@ -29,9 +47,9 @@ export type AuditEventsPage = { events: AuditEvent[]; nextBefore: string | null 
  */
 export async function getAuditEvents(
   orgId: string,
-  options: { before?: string | null; action?: string | null } = {},
+  options: { before?: string | number | null; action?: string | null } = {},
 ): Promise<AuditEventsPage> {
-  const body = await api.get<{ events: AuditEvent[]; nextBefore?: string | null }>(`/organizations/${orgId}/audit-events`, {
+  const body = await api.get<{ events: AuditEvent[]; nextBefore?: string | number | null }>(`/organizations/${orgId}/audit-events`, {
     query: { limit: AUDIT_PAGE_SIZE, before: options.before, action: options.action },
   });
   return { events: body.events, nextBefore: body.nextBefore ?? null };
@@ -48,7 +66,7 @@ export function getAuditEventsQueryOptions(orgId: string, action: string) {
   return infiniteQueryOptions({
     queryKey: ['organizations', orgId, 'audit-events', action],
     queryFn: ({ pageParam }) => getAuditEvents(orgId, { before: pageParam, action }),
-    initialPageParam: null as string | null,
+    initialPageParam: null as string | number | null,
     getNextPageParam: (lastPage) => lastPage.nextBefore,
   });
 }

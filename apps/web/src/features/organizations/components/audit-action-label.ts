@@ -10,6 +10,23 @@ const labels: Record<string, string> = {
   'workspace.create': 'Created a workspace',
   'workspace.update': 'Changed a workspace',
   'workspace.delete': 'Deleted a workspace',
+  'customer_file.upload': 'Uploaded a customer file',
+  'customer_file.import': 'Imported a customer file',
+  'customer_file.delete': 'Deleted a customer file',
+  'customer_file.rejected_download': 'Downloaded rejected rows',
+  'surface.create': 'Started a demand surface',
+  'surface.cancel': 'Cancelled a demand surface',
+  'surface.retry': 'Retried a demand surface',
+  'surface.delete': 'Deleted a demand surface',
+  'billing.checkout': 'Opened a checkout',
+  'billing.purchase': 'Paid (credits or seats)',
+  'billing.seats_change': 'Changed the number of seats',
+  'invitation.create': 'Invited someone',
+  'invitation.revoke': 'Revoked an invitation',
+  'invitation.resend': 'Resent an invitation',
+  'invitation.accept': 'Accepted an invitation',
+  'member.role_change': 'Changed a member’s role',
+  'member.remove': 'Removed a member',
 };
 
 /**
