@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { DemandscapeApp } from '../src/app.js';
 import { testAppCreate } from './utils.js';
+import { migrationsList } from '../src/migrations/index.js';
 
 describe('serving the built web app', () => {
   let ds: DemandscapeApp;
@@ -55,7 +56,7 @@ describe('SQLite file database', () => {
     const again = await testAppCreate({ DATABASE_FILE: file });
     try {
       const rows: { name: string }[] = await again.orm.em.getConnection().execute('select name from mikro_orm_migrations');
-      expect(rows).toHaveLength(1);
+      expect(rows).toHaveLength(migrationsList.length);
     } finally {
       await again.close();
     }
