@@ -1,6 +1,7 @@
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ConfigError, configFromEnv } from '../src/config.js';
 import { CustomerFileSchema } from '../src/modules/customer-file/customer-file.entity.js';
 import { customerFilesInterrupted } from '../src/modules/customer-file/customer-file-import.js';
 import { testMembershipAdd, testUserSignedIn, type TestClient } from './utils.js';
@@ -105,5 +106,16 @@ describe('customer files: limits, refused types, roles, aggregate', () => {
     const f = (await s.owner.get(`${s.base}/${up.body.customerFile.id}`).expect(200)).body.customerFile;
     expect(f).toMatchObject({ status: 'failed', rawFileKept: true, error: { code: 'IMPORT_INTERRUPTED', message: 'Import interrupted (the server stopped) — run the import again.' } });
     await s.owner.get(`${s.base}/${f.id}/preview`).expect(200);
+  });
+});
+
+describe('UPLOAD_MAX_BYTES and the uploads folder', () => {
+  it('defaults to 200 MB under DATA_DIR/uploads and refuses a bad value by name', () => {
+    const config = configFromEnv({ NODE_ENV: 'test', DATA_DIR: '/srv/ds-data' });
+    expect(config.uploadMaxBytes).toBe(200 * 1024 * 1024);
+    expect(config.uploadsDir).toBe(join('/srv/ds-data', 'uploads'));
+    expect(configFromEnv({ NODE_ENV: 'test', UPLOAD_MAX_BYTES: '1048576' }).uploadMaxBytes).toBe(1048576);
+    expect(() => configFromEnv({ NODE_ENV: 'test', UPLOAD_MAX_BYTES: '200MB' })).toThrow(ConfigError);
+    expect(() => configFromEnv({ NODE_ENV: 'test', UPLOAD_MAX_BYTES: '0' })).toThrow('UPLOAD_MAX_BYTES: must be at least 1 byte');
   });
 });

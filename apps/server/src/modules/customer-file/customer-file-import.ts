@@ -93,7 +93,7 @@ export async function customerFileImport(orm: MikroORM, fileId: string, uploadsD
     if (!f.mapping) throw new ImportFailure('NO_MAPPING', 'No column mapping was chosen. Import again with a mapping.');
     const acc = new ImportAccumulator(f.detected.columns, f.mapping, f.detected.decimalComma, f.detected.hasHeader);
     let skipHeader = f.detected.hasHeader;
-    await rowsRead(path, { format: f.format, delimiter: f.detected.delimiter, encoding: f.detected.encoding }, (fields) => {
+    await rowsRead(path, { format: f.format, delimiter: f.detected.delimiter, encoding: f.detected.encoding, simpleLines: f.detected.simpleLines }, (fields) => {
       if (skipHeader) skipHeader = false;
       else acc.add(fields);
     });

@@ -4,7 +4,7 @@ import { cellNumber } from './cell-number.js';
 import { columnGuess } from './column-guess.js';
 import { csvDialectDetect } from './csv-dialect.js';
 import type { CustomerFileDetected } from './customer-file.entity.js';
-import { textDecoderLabel, textEncodingDetect } from './file-sniff.js';
+import { textDecoderLabel, textScan } from './file-sniff.js';
 import { rowsRead } from './row-reader.js';
 
 /** Rows shown on the mapping step. */
@@ -54,14 +54,15 @@ export async function customerFileInspect(path: string, format: 'csv' | 'xlsx'):
   let encoding: CustomerFileDetected['encoding'] = 'utf-8';
   let delimiter: string | null = null;
   let decimalComma = false;
+  let simpleLines = false;
   if (format === 'csv') {
-    encoding = await textEncodingDetect(path);
+    ({ encoding, simpleLines } = await textScan(path));
     const lines = await firstLines(path, encoding);
     ({ delimiter, decimalComma } = csvDialectDetect(lines));
   }
   const rows: string[][] = [];
   try {
-    await rowsRead(path, { format, delimiter, encoding }, (fields) => {
+    await rowsRead(path, { format, delimiter, encoding, simpleLines }, (fields) => {
       rows.push(fields);
       return rows.length <= PREVIEW_ROWS;
     });
@@ -80,7 +81,7 @@ export async function customerFileInspect(path: string, format: 'csv' | 'xlsx'):
     throw new AppError(400, 'NO_COLUMNS', 'Only one column was found. Separate columns with a comma, semicolon, tab or |, and put longitude and latitude in columns of their own.', 'file');
   }
   const suggested = columnGuess(columns);
-  const detected: CustomerFileDetected = { columns, hasHeader, delimiter, decimalComma, encoding, suggested };
+  const detected: CustomerFileDetected = { columns, hasHeader, delimiter, decimalComma, encoding, simpleLines, suggested };
   return { detected, preview: previewOf(detected, hasHeader ? rows.slice(1, PREVIEW_ROWS + 1) : rows.slice(0, PREVIEW_ROWS)) };
 }
 
@@ -112,7 +113,7 @@ export function previewOf(detected: CustomerFileDetected, rows: string[][]): Cus
 export async function previewRows(path: string, format: 'csv' | 'xlsx', detected: CustomerFileDetected): Promise<string[][]> {
   const rows: string[][] = [];
   const wanted = PREVIEW_ROWS + (detected.hasHeader ? 1 : 0);
-  await rowsRead(path, { format, delimiter: detected.delimiter, encoding: detected.encoding }, (fields) => {
+  await rowsRead(path, { format, delimiter: detected.delimiter, encoding: detected.encoding, simpleLines: detected.simpleLines }, (fields) => {
     rows.push(fields);
     return rows.length < wanted;
   });

@@ -24,6 +24,8 @@ export interface CustomerFileDetected {
   delimiter: string | null;
   decimalComma: boolean;
   encoding: 'utf-8' | 'utf-8-bom' | 'latin1';
+  /** CSV without quotes and with `\n` line ends: read by plain splitting (faster); else the full parser. */
+  simpleLines?: boolean;
   /** Auto-detected columns; the analyst confirms or changes them at import. */
   suggested: Partial<ColumnMapping>;
   /** Name of the worksheet read (XLSX only: the first one). */

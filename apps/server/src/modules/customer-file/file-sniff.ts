@@ -60,20 +60,39 @@ function binaryKind(bytes: Buffer): string | null {
   return null;
 }
 
+/** What one pass over a text file found. */
+export interface TextScan {
+  encoding: 'utf-8' | 'utf-8-bom' | 'latin1';
+  /**
+   * No `"` anywhere and lines end in `\n` (or `\r\n`): rows can be split on line breaks and the
+   * delimiter directly, without the full CSV parser.
+   */
+  simpleLines: boolean;
+}
+
 /**
- * Detects a text file's encoding: UTF-8 with or without byte-order mark when the whole file is valid
- * UTF-8, else Latin-1 (decoded as Windows-1252, the WHATWG meaning of "latin1", which also covers €).
- * Reads the whole file so a stray byte late in the file is not missed.
+ * Reads a whole text file once: its encoding — UTF-8 with or without byte-order mark when every
+ * byte sequence is valid UTF-8, else Latin-1 (decoded as Windows-1252, the WHATWG meaning of
+ * "latin1", which also covers €) — and whether it has quotes or old-style `\r`-only line ends.
+ * The whole file is read so a stray byte late in the file is not missed.
  * @param path - the file
- * @returns the encoding name used in `detected.encoding`
+ * @returns the encoding and whether plain line splitting is safe
  * @example
- * await textEncodingDetect('/data/uploads/5b0e…'); // 'utf-8-bom'
+ * await textScan('/data/uploads/5b0e…'); // { encoding: 'utf-8-bom', simpleLines: true }
  */
-export async function textEncodingDetect(path: string): Promise<'utf-8' | 'utf-8-bom' | 'latin1'> {
+export async function textScan(path: string): Promise<TextScan> {
   let first = true;
   let bom = false;
+  let utf8 = true;
+  let quote = false;
+  let lf = false;
+  let cr = false;
   let carry: Buffer = Buffer.alloc(0);
   for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 }) as AsyncIterable<Buffer>) {
+    if (!quote && chunk.includes(0x22)) quote = true;
+    if (!lf && chunk.includes(0x0a)) lf = true;
+    if (!cr && chunk.includes(0x0d)) cr = true;
+    if (!utf8) continue;
     let data = carry.length > 0 ? Buffer.concat([carry, chunk]) : chunk;
     if (first) {
       first = false;
@@ -82,10 +101,10 @@ export async function textEncodingDetect(path: string): Promise<'utf-8' | 'utf-8
     const cut = utf8SafeEnd(data);
     carry = Buffer.from(data.subarray(cut));
     data = data.subarray(0, cut);
-    if (!isUtf8(data)) return 'latin1';
+    if (!isUtf8(data)) utf8 = false;
   }
-  if (carry.length > 0 && !isUtf8(carry)) return 'latin1';
-  return bom ? 'utf-8-bom' : 'utf-8';
+  if (utf8 && carry.length > 0 && !isUtf8(carry)) utf8 = false;
+  return { encoding: !utf8 ? 'latin1' : bom ? 'utf-8-bom' : 'utf-8', simpleLines: !quote && (lf || !cr) };
 }
 
 /** Index where an incomplete trailing UTF-8 sequence starts (or the length when none). */

@@ -47,3 +47,24 @@ describe('xlsxCellText', () => {
     expect(xlsxCellText({ error: '#N/A' })).toBe('#N/A');
   });
 });
+
+describe('rowsRead: plain splitting gives the same rows as the CSV parser', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'ds-rows2-'));
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+  it.each([
+    ['LF', 'name;lat;lon\nA;44,5;-38,5\n\n  \n;;\nB;44,6;\nC'],
+    ['CRLF with a BOM', '\ufefflat,lon\r\n44.5,-38.5\r\n\r\n44.6,-38.4\r\n'],
+  ])('%s', async (_name, text) => {
+    const path = join(dir, `${_name}.csv`);
+    writeFileSync(path, text);
+    const delimiter = text.includes(';') ? ';' : ',';
+    const collect = async (simpleLines: boolean) => {
+      const rows: string[][] = [];
+      await rowsRead(path, { format: 'csv', delimiter, simpleLines }, (f) => void rows.push(f));
+      return rows;
+    };
+    const parsed = await collect(false);
+    expect(parsed.length).toBeGreaterThan(1);
+    expect(await collect(true)).toEqual(parsed);
+  });
+});

@@ -11,6 +11,8 @@ export interface RowSourceOptions {
   delimiter?: string | null;
   /** CSV only. */
   encoding?: 'utf-8' | 'utf-8-bom' | 'latin1';
+  /** CSV only: the file has no quotes and `\n` line ends (`textScan`), so plain splitting is exact. */
+  simpleLines?: boolean;
 }
 
 /** Called for every non-blank line (header included); return false to stop reading. */
@@ -30,7 +32,36 @@ export type RowCallback = (fields: string[]) => boolean | void;
  */
 export async function rowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
   if (options.format === 'xlsx') return xlsxRowsRead(path, onRow);
+  if (options.simpleLines && options.delimiter) return linesRowsRead(path, options, onRow);
   return csvRowsRead(path, options, onRow);
+}
+
+/** True for a row whose cells are all blank (treated like an empty line). */
+function blankRow(fields: string[]): boolean {
+  return fields[0].trim() === '' && fields.every((f) => f.trim() === '');
+}
+
+async function linesRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
+  const decoder = new TextDecoder(textDecoderLabel(options.encoding ?? 'utf-8'));
+  const delimiter = options.delimiter!;
+  const file = createReadStream(path, { highWaterMark: 1 << 20 });
+  let rest = '';
+  const emit = (line: string): boolean => {
+    const fields = (line.endsWith('\r') ? line.slice(0, -1) : line).split(delimiter);
+    if (blankRow(fields)) return true;
+    return onRow(fields) !== false;
+  };
+  try {
+    for await (const chunk of file as AsyncIterable<Buffer>) {
+      const lines = (rest + decoder.decode(chunk, { stream: true })).split('\n');
+      rest = lines.pop()!;
+      for (const line of lines) if (!emit(line)) return;
+    }
+    const last = rest + decoder.decode();
+    if (last !== '') emit(last);
+  } finally {
+    file.destroy();
+  }
 }
 
 function csvRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
@@ -68,7 +99,7 @@ function csvRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback
       skipEmptyLines: true,
       chunk(results: Papa.ParseResult<string[]>, parser: Papa.Parser) {
         for (const fields of results.data) {
-          if (fields[0].trim() === '' && fields.every((f) => f.trim() === '')) continue;
+          if (blankRow(fields)) continue;
           if (onRow(fields) === false) {
             parser.abort();
             file.destroy();
