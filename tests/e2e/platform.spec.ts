@@ -25,6 +25,7 @@ describe('the platform in a real browser', () => {
     server = await serverStart({ googleEmail: GOOGLE.email, googleName: GOOGLE.name });
     context = await browserLaunch();
     page = context.pages()[0] ?? (await context.newPage());
+    page.setDefaultTimeout(60_000);
     page.on('pageerror', (error) => pageErrors.push(error.message));
   });
 

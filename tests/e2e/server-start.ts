@@ -36,11 +36,18 @@ async function healthWait(baseUrl: string, child: ChildProcess, output: () => st
 /**
  * Starts the built server (apps/server/dist) with the built web app on free ports, a temporary
  * data folder, mail captured in memory and the local Google sign-in stand-in.
- * @param options the identity the Google stand-in signs in as
+ * @param options the identity the Google stand-in signs in as; `demoSeed` adds the demo organization
  * @returns the base URL and a `stop` that ends the process and deletes the data folder
  * @example const server = await serverStart({ googleEmail: 'maren@larchloaf.test', googleName: 'Maren Larchwood' });
  */
-export async function serverStart(options: { googleEmail: string; googleName: string }): Promise<RunningServer> {
+export async function serverStart(options: {
+  googleEmail: string;
+  googleName: string;
+  /** Add the invented Larchloaf demo organization, users (one per role) and credits. */
+  demoSeed?: boolean;
+  /** More environment for the server (e.g. free ports for the payment and mail stand-ins); wins over the defaults. */
+  env?: Record<string, string>;
+}): Promise<RunningServer> {
   for (const [file, what] of [
     [serverEntry, 'the server'],
     [webIndex, 'the web app'],
@@ -63,13 +70,14 @@ export async function serverStart(options: { googleEmail: string; googleName: st
       PUBLIC_URL: baseUrl,
       DATA_DIR: dataDir,
       START_STANDINS: 'true',
-      DEMO_SEED: 'false',
+      DEMO_SEED: options.demoSeed ? 'true' : 'false',
       MAIL_TRANSPORT: 'capture',
       OAUTH_FAKE_PORT: String(oauthPort),
       OAUTH_FAKE_EMAIL: options.googleEmail,
       OAUTH_FAKE_NAME: options.googleName,
       OAUTH_FAKE_SUBJECT: 'fake-google-e2e-0001',
       LOG_LEVEL: 'warn',
+      ...options.env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -86,7 +94,7 @@ export async function serverStart(options: { googleEmail: string; googleName: st
     rmSync(dataDir, { recursive: true, force: true });
   };
   try {
-    await healthWait(baseUrl, child, output, 30_000);
+    await healthWait(baseUrl, child, output, 90_000);
   } catch (error) {
     await stop();
     throw error;
