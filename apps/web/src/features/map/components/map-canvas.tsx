@@ -3,7 +3,7 @@ import type { FeatureCollection, Geometry } from 'geojson';
 import type { Map as MapLibreMap, StyleSpecification } from 'maplibre-gl';
 import { useEffect, useRef, useState } from 'react';
 import { basemapLabels } from '../lib/basemap-style';
-import { contourLayersSync, customerLayerSync, surfaceLayerSync } from '../lib/map-layers';
+import { contourLayersSync, customerLayerSync, mapLayerIds, surfaceLayerSync } from '../lib/map-layers';
 import { mapInstanceCreate, markerAdd } from '../lib/map-instance';
 
 type Corners = [[number, number], [number, number], [number, number], [number, number]];
@@ -92,7 +92,16 @@ export function MapCanvas(props: MapCanvasProps) {
   }, [map, props.fitKey]);
 
   useEffect(() => {
-    if (map) surfaceLayerSync(map, props.surfaceImage ?? null, props.surfaceOpacity ?? 0.8);
+    if (!map) return;
+    surfaceLayerSync(map, props.surfaceImage ?? null, props.surfaceOpacity ?? 0.8);
+    // An image decoded while the map sits idle is not drawn until something moves (seen in Chromium); draw once more.
+    const redraw = (event: { sourceId?: string }) => {
+      if (event.sourceId === mapLayerIds.surface) map.triggerRepaint();
+    };
+    map.on('sourcedata', redraw);
+    return () => {
+      map.off('sourcedata', redraw);
+    };
   }, [map, props.surfaceImage, props.surfaceOpacity]);
 
   useEffect(() => {
@@ -112,7 +121,8 @@ export function MapCanvas(props: MapCanvasProps) {
           </Alert>
         </div>
       ) : null}
-      <div ref={container} role="region" aria-label={props.label} className="absolute inset-0 overflow-hidden rounded-panel" />
+      {/* MapLibre makes its container position: relative, so it is sized by height, not by inset. */}
+      <div ref={container} role="region" aria-label={props.label} className="h-full w-full overflow-hidden rounded-panel border border-line" />
     </div>
   );
 }

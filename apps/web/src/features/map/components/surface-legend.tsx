@@ -1,6 +1,7 @@
 import { ColourLegend } from '@demandscape/ui';
 import type { SurfaceThreshold } from '../types';
-import { densityInterpolator, differenceInterpolator, rampStops } from '../utils/colour-ramp';
+import { densityInterpolator, differenceInterpolator, fadedRampStops, rampStops } from '../utils/colour-ramp';
+import { RASTER_FADE_SHARE } from '../utils/raster-colouring';
 import { areaText, densityUnitLabel, type AreaUnit, type WeightKind } from '../utils/density-unit';
 import { contourDash, CONTOUR_COLOUR } from '../lib/map-layers';
 import { divergingLegendTicks, sequentialLegendTicks } from '../utils/legend-scale';
@@ -46,13 +47,13 @@ export function SurfaceLegend(props: SurfaceLegendProps) {
       <ColourLegend
         title={difference ? `Difference: ${props.compareName ?? 'other surface'} minus this one` : 'Demand'}
         unit={unitText}
-        stops={rampStops(difference ? differenceInterpolator : densityInterpolator)}
+        stops={difference ? rampStops(differenceInterpolator) : fadedRampStops(densityInterpolator, 21, RASTER_FADE_SHARE)}
         ticks={difference ? divergingLegendTicks(props.scaleTop) : sequentialLegendTicks(props.scaleTop)}
       >
         {difference ? (
           <p className="text-ink-muted">Orange: more demand in the compared surface; purple: less. Near-zero differences are left clear.</p>
         ) : (
-          <p className="text-ink-muted">Cells under 0.5 % of the top value are left clear so the map shows through.</p>
+          <p className="text-ink-muted">The lowest tenth of the scale fades into the map; cells under 0.5 % of the top value are left clear.</p>
         )}
       </ColourLegend>
       {!difference && props.thresholds?.length ? (

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import { imageUrlFromRgba } from '../lib/map-instance';
 import { colourTable, densityInterpolator, differenceInterpolator } from '../utils/colour-ramp';
-import { RASTER_FLOOR_SHARE, rasterMaxAbs, rasterRgba } from '../utils/raster-colouring';
+import { RASTER_FADE_SHARE, RASTER_FLOOR_SHARE, rasterMaxAbs, rasterRgba } from '../utils/raster-colouring';
 import { rasterCorners, type WebRaster } from '../utils/web-raster';
 
 const densityTable = colourTable(densityInterpolator);
@@ -21,7 +21,7 @@ export function useRasterImage(raster: WebRaster | undefined, kind: 'sequential'
     const top = sharedTop ?? (kind === 'sequential' ? raster.max : rasterMaxAbs(raster.values));
     if (!(top > 0)) return { image: null, scaleTop: 0, error: kind === 'sequential' ? 'This surface is zero everywhere.' : 'The two surfaces are the same everywhere.' };
     const floor = top * RASTER_FLOOR_SHARE;
-    const scale = kind === 'sequential' ? { kind, max: top, floor } : { kind, maxAbs: top, floor };
+    const scale = kind === 'sequential' ? { kind, max: top, floor, fade: RASTER_FADE_SHARE } : { kind, maxAbs: top, floor };
     try {
       const url = imageUrlFromRgba(rasterRgba(raster.values, kind === 'sequential' ? densityTable : differenceTable, scale), raster.width, raster.height);
       return { image: { url, corners: rasterCorners(raster.bounds) }, scaleTop: top, error: null };

@@ -20,6 +20,11 @@ describe('rasterRgba', () => {
     expect([...rgba.slice(8, 11)]).toEqual([...cividis.rgb.slice(765, 768)]);
   });
 
+  it('fades the lowest values in linearly when asked', () => {
+    const rgba = rasterRgba(new Float32Array([2, 5, 10, 60]), cividis, { kind: 'sequential', max: 100, floor: 1, fade: 0.1 });
+    expect([rgba[3], rgba[7], rgba[11], rgba[15]]).toEqual([51, 128, 255, 255]);
+  });
+
   it('centres a diverging scale at 0 and hides near-zero differences', () => {
     const rgba = rasterRgba(new Float32Array([-10, 0, 10, 5]), puor, { kind: 'diverging', maxAbs: 10, floor: 0.1 });
     expect([...rgba.slice(0, 3)]).toEqual([...puor.rgb.slice(0, 3)]);

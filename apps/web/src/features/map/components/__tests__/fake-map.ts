@@ -20,6 +20,13 @@ export class FakeMap {
     this.handlers.set(event, [...(this.handlers.get(event) ?? []), handler]);
     return this;
   }
+  once(event: string, handler: (event?: unknown) => void) {
+    const wrapped = (payload?: unknown) => {
+      this.off(event, wrapped);
+      handler(payload);
+    };
+    return this.on(event, wrapped);
+  }
   off(event: string, handler: (event?: unknown) => void) {
     this.handlers.set(event, (this.handlers.get(event) ?? []).filter((h) => h !== handler));
     return this;
@@ -59,6 +66,7 @@ export class FakeMap {
     this.layers.get(id)!.layout[key] = value;
   }
   fitBounds() {}
+  triggerRepaint() {}
   jumpTo() {}
   getZoom() {
     return this.zoom;
