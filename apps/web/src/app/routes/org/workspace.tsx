@@ -1,6 +1,6 @@
 import { Button, Card, CardHeader, Dialog, Spinner } from '@demandscape/ui';
 import type { QueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getCustomerFilesQueryOptions, useCustomerFiles } from '../../../features/customer-files/api/get-customer-files';
@@ -78,13 +78,19 @@ export default function WorkspaceRoute() {
   const surfaces = useSurfaces(orgId, workspaceId);
   const [chosenStep, setChosenStep] = useState<(typeof openSteps)[number] | null>(null);
   const [chosenSurfaceId, setChosenSurfaceId] = useState<string | null>(null);
+  const hasImported = files.data?.some((f) => f.status === 'imported');
+
+  // On arrival, open the next step to do (customers first, then the surface); after that the step
+  // only changes when the user picks one, so a finished import does not swap the report away.
+  useEffect(() => {
+    if (chosenStep === null && hasImported !== undefined) setChosenStep(hasImported ? 'surface' : 'customers');
+  }, [chosenStep, hasImported]);
 
   if (!workspace.data) return <Spinner label="Loading the workspace" className="flex justify-center p-16" />;
   const ws = workspace.data;
 
   const imported = (files.data ?? []).filter((f) => f.status === 'imported');
-  // Until the user picks a step, open the next one to do: customers first, then the surface.
-  const step = chosenStep ?? (imported.length ? 'surface' : 'customers');
+  const step = chosenStep ?? 'customers';
   const finished = [...(surfaces.data ?? [])].filter((s) => s.status === 'succeeded').sort((a, b) => b.queuedAt.localeCompare(a.queuedAt));
   const shown = finished.find((s) => s.id === chosenSurfaceId) ?? finished[0] ?? null;
   const shownFile = shown ? (files.data ?? []).find((f) => f.id === shown.customerFileId) : undefined;
