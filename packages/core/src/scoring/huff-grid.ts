@@ -49,13 +49,21 @@ export function huffTermsInto(grid: Pick<HuffGrid, 'xKm' | 'yKm' | 'alpha' | 'be
   const sy = site.y / 1000;
   const n = xKm.length;
   const half = -beta / 2;
+  if (!add) out.fill(0, 0, n);
+  if (beta === 2) {
+    for (let c = 0; c < n; c++) {
+      const dx = xKm[c] - sx;
+      const dy = yKm[c] - sy;
+      const d2 = dx * dx + dy * dy;
+      out[c] += a / (d2 < minDistanceSqKm ? minDistanceSqKm : d2);
+    }
+    return;
+  }
   for (let c = 0; c < n; c++) {
     const dx = xKm[c] - sx;
     const dy = yKm[c] - sy;
-    let d2 = dx * dx + dy * dy;
-    if (d2 < minDistanceSqKm) d2 = minDistanceSqKm;
-    const t = beta === 2 ? a / d2 : a * Math.pow(d2, half);
-    out[c] = add ? out[c] + t : t;
+    const d2 = dx * dx + dy * dy;
+    out[c] += a * Math.pow(d2 < minDistanceSqKm ? minDistanceSqKm : d2, half);
   }
 }
 
@@ -87,7 +95,8 @@ export function huffGrid(
     xKm[c] = cells.x[c] / 1000;
     yKm[c] = cells.y[c] / 1000;
   }
-  const halfCellKm = surface.spec.cellSize / 2000;
+  const { spec } = surface;
+  const halfCellKm = spec.cellSize / 2000;
   const grid: HuffGrid = {
     cells,
     xKm,

@@ -84,14 +84,24 @@ describe('siteScores', () => {
     expect(r.candidates[0].cannibalizedFrom).toEqual([]);
   });
 
-  it('gives the same numbers with and without the per-store breakdown', () => {
-    const surface = randomSurface(11);
-    const sites = [site('o', 'own', 3000, 4000), site('k', 'competitor', 5000, 5000), site('c', 'candidate', 4000, 3000)];
-    const a = siteScores(surface, sites).candidates[0];
-    const b = siteScores(surface, sites, { breakdown: false }).candidates[0];
-    expect(b.captured).toBeCloseTo(a.captured, 9);
-    expect(b.cannibalization).toBeCloseTo(a.cannibalization, 9);
-  });
+  for (const beta of [2, 1.5]) {
+    it(`gives the same numbers with and without the per-store breakdown (blocked batch path), β = ${beta}`, () => {
+      const surface = randomSurface(11);
+      surface.values.fill(0, 30, 60); // a gap inside rows: packed cells must keep their columns
+      const sites = [
+        site('o', 'own', 3000, 4000),
+        site('k', 'competitor', 5000, 5000),
+        site('c', 'candidate', 4000, 3000),
+        site('d', 'candidate', 1125, 2125, 3), // on a cell centre: minimum distance applies
+      ];
+      const a = siteScores(surface, sites, { beta }).candidates;
+      const b = siteScores(surface, sites, { beta, breakdown: false }).candidates;
+      for (let k = 0; k < 2; k++) {
+        expect(b[k].captured).toBeCloseTo(a[k].captured, 9);
+        expect(b[k].cannibalization).toBeCloseTo(a[k].cannibalization, 9);
+      }
+    });
+  }
 
   it('names the site whose input is wrong', () => {
     const surface = oneCell(10);

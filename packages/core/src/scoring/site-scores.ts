@@ -1,6 +1,7 @@
 import { CoreError, throwIfAborted } from '../errors.js';
 import { sitesValidate, type Site } from '../sites/site.js';
 import { huffCandidate, huffCandidateSet } from './huff-candidate.js';
+import { huffCandidatesAlone } from './huff-candidates-alone.js';
 import { huffBaseCaptured, huffGrid, type HuffGrid } from './huff-grid.js';
 import type { HuffOptions } from './huff-options.js';
 import { ringDemands, RING_RADII_DEFAULT_M, type RingDemand } from './ring-demand.js';
@@ -92,9 +93,10 @@ export function siteScores(surface: ScoringSurface, sites: readonly Site[], opti
   const ownBase = huffBaseCaptured(grid, own);
   const breakdown = options.breakdown ?? true;
   const scratch = breakdown ? new Float64Array(grid.cells.demand.length) : undefined;
+  const batch = breakdown ? undefined : huffCandidatesAlone(grid, candidates, options.signal);
   const scores = candidates.map((site, k) => {
     throwIfAborted(options.signal);
-    const r = huffCandidate(grid, site, breakdown, scratch);
+    const r = batch ? { captured: batch.captured[k], cannibalization: batch.cannibalization[k], cannibalizedFrom: undefined } : huffCandidate(grid, site, true, scratch);
     options.onProgress?.((k + 1) / candidates.length);
     return {
       id: site.id,
