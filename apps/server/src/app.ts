@@ -8,6 +8,7 @@ import helmet from 'helmet';
 import { RequestContext } from '@mikro-orm/core';
 import type { MikroORM } from '@mikro-orm/sqlite';
 import { pinoHttp } from 'pino-http';
+import { SurfaceRunner } from './jobs/surface-runner.js';
 import type { AppConfig } from './config.js';
 import { ormInit } from './db.js';
 import { loggerCreate } from './logger.js';
@@ -28,6 +29,7 @@ import { stripeClientCreate } from './modules/billing/stripe-client.js';
 import { invitationOrgRoutes, invitationPublicRoutes } from './modules/invitation/invitation.routes.js';
 import { SqliteSessionStore } from './modules/session/session-store.js';
 import { meRoutes } from './modules/user/user.routes.js';
+import { surfaceRoutes } from './modules/surface/surface.routes.js';
 import { webStaticMount } from './web-static.js';
 
 const { version } = createRequire(import.meta.url)('../package.json') as { version: string };
@@ -41,6 +43,8 @@ export interface DemandscapeApp {
   sessionStore: SqliteSessionStore;
   /** Whether the built web app is served. */
   servesWeb: boolean;
+  /** Runs queued demand surfaces; `server.ts` (and tests that need runs) call `start()`. */
+  surfaceRunner: SurfaceRunner;
   close: () => Promise<void>;
 }
 
@@ -151,6 +155,8 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   await customerFilesInterrupted(orm);
   const customerFiles = customerFileRoutes({ em, orm, uploadsDir: config.uploadsDir, uploadMaxBytes: config.uploadMaxBytes });
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/customer-files', customerFiles.router);
+  const surfaceRunner = new SurfaceRunner(orm, { concurrency: config.runnerConcurrency, log, mailer, publicUrl: config.publicUrl });
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId/surfaces', surfaceRoutes(em, surfaceRunner));
   app.use('/api/organizations/:orgId/billing', billingRoutes({ em, stripe, billing: config.billing, publicUrl: config.publicUrl }));
   app.use('/api/organizations/:orgId/invitations', invitationOrgRoutes({ em, mailer, publicUrl: config.publicUrl }));
   app.use('/api/invitations', invitationPublicRoutes({ em }));
@@ -165,8 +171,10 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
     mailbox: mailer.captured,
     sessionStore,
     servesWeb,
+    surfaceRunner,
     close: async () => {
       clearInterval(pruneTimer);
+      await surfaceRunner.stop();
       await customerFiles.imports.idle();
       mailer.close();
       await orm.close(true);

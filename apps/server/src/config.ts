@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { availableParallelism } from 'node:os';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -51,6 +52,7 @@ const envSchema = z.object({
   STRIPE_API_HOST: z.string().min(1).optional(),
   STRIPE_API_PORT: portFromEnv(3002),
   STRIPE_API_PROTOCOL: z.enum(['http', 'https'], { message: 'must be http or https' }).optional(),
+  RUNNER_CONCURRENCY: z.coerce.number({ message: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(64, 'must be at most 64').optional(),
   UPLOAD_MAX_BYTES: z.coerce.number({ message: 'must be a whole number of bytes' }).int('must be a whole number of bytes').min(1, 'must be at least 1 byte').default(200 * 1024 * 1024),
 });
 
@@ -96,6 +98,8 @@ export interface AppConfig {
     /** True when the API settings point at the local stand-in, which the dev starter then runs. */
     usesLocalFake: boolean;
   };
+  /** Demand surfaces computed at a time by this process (RUNNER_CONCURRENCY, default the CPU count). */
+  runnerConcurrency: number;
   /** Largest customer-file upload in bytes (UPLOAD_MAX_BYTES, default 200 MB). */
   uploadMaxBytes: number;
   /** Raw customer-file uploads waiting for import: `${DATA_DIR}/uploads`. */
@@ -188,6 +192,7 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     webDist: resolve(e.WEB_DIST ?? join(packageDir, '..', 'web', 'dist')),
     billing: billingConfig(e, production),
+    runnerConcurrency: e.RUNNER_CONCURRENCY ?? availableParallelism(),
     uploadMaxBytes: e.UPLOAD_MAX_BYTES,
     uploadsDir: join(dataDir, 'uploads'),
   };

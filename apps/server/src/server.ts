@@ -54,6 +54,7 @@ if (config.startStandIns && config.billing.usesLocalFake) {
 const ds = await createApp(config);
 stops.unshift(() => ds.close());
 if (config.demoSeed) await demoSeed(ds.orm.em.fork());
+await ds.surfaceRunner.start();
 
 const server: Server = ds.app.listen(config.port, config.host ?? '::');
 server.on('error', (err) => {

@@ -17,6 +17,8 @@ export const PERMISSIONS = {
   'customerFile.read': ROLES,
   'customerFile.write': ['owner', 'analyst'],
   'customerPoints.read': ['owner', 'analyst'],
+  'surface.read': ROLES,
+  'surface.write': ['owner', 'analyst'],
   'billing.manage': ['owner'],
   'invitation.manage': ['owner'],
   'members.manage': ['owner'],
