@@ -78,6 +78,11 @@ describe('customer files: upload, detection, import', () => {
     expect([points.lon[1], points.lat[1]]).toEqual([Number(second[2].replace(',', '.')), Number(second[1].replace(',', '.'))]);
   });
 
+  it('keeps a non-ASCII file name as sent', async () => {
+    const res = await customerFileUpload(s.owner, s.base, 'Kundenliste März.csv', fixture('utf8-bom.csv')).expect(201);
+    expect(res.body.customerFile.name).toBe('Kundenliste März.csv');
+  });
+
   it('strips a UTF-8 byte-order mark from the first column name', async () => {
     const up = await customerFileUpload(s.owner, s.base, 'bom.csv', fixture('utf8-bom.csv')).expect(201);
     expect(up.body.preview.columns).toEqual(['lat', 'lon', 'visits']);

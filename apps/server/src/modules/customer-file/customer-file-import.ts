@@ -128,7 +128,8 @@ export async function customerFileImport(orm: MikroORM, fileId: string, uploadsD
       current.importedAt = new Date();
       current.storedName = null;
     });
-    await rm(path, { force: true });
+    // The import is committed; a raw file that cannot be removed now is removed with the file later.
+    await rm(path, { force: true }).catch(() => {});
   } catch (err) {
     const fresh = orm.em.fork();
     const current = await fresh.findOne(CustomerFileSchema, fileId);

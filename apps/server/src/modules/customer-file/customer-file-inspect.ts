@@ -74,9 +74,6 @@ export async function customerFileInspect(path: string, format: 'csv' | 'xlsx'):
   }
   if (rows.length === 0) throw new AppError(400, 'NO_COLUMNS', 'No rows found in the file (the first worksheet is read for XLSX). Put a header line and one customer per row.', 'file');
   const { columns, hasHeader } = columnsFromFirstRow(rows[0]);
-  if (format === 'xlsx' && !hasHeader && columns.length < 2) {
-    throw new AppError(400, 'NO_COLUMNS', 'The first worksheet has fewer than two columns; longitude and latitude need one column each.', 'file');
-  }
   if (columns.length < 2) {
     throw new AppError(400, 'NO_COLUMNS', 'Only one column was found. Separate columns with a comma, semicolon, tab or |, and put longitude and latitude in columns of their own.', 'file');
   }

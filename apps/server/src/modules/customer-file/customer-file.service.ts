@@ -13,7 +13,7 @@ import { customerFileInspect, previewOf, previewRows, type CustomerFilePreview }
 import { customerFileView, type CustomerFileView } from './customer-file-view.js';
 import { fileSniff } from './file-sniff.js';
 
-/** Where a request points: organization, workspace, and whether the caller may see example rows. */
+/** Where a request points: the organization (from the membership) and the workspace (from the path). */
 export interface CustomerFileScope {
   organizationId: string;
   workspaceId: string;
