@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { discRectOverlap } from '../lib/disc-rect-overlap.js';
+import { randomSeeded } from '../lib/random-seeded.js';
 import type { GridSpec } from '../types.js';
 import { ringDemand, ringDemands, ringRadiusFromMiles } from './ring-demand.js';
 import type { ScoringSurface } from './scoring-surface.js';
@@ -37,6 +39,28 @@ describe('ringDemand', () => {
   it('counts the part of a cell inside the ring, not cell centres — a radius of half a cell around a centre takes π/4 of it [closed form]', () => {
     const one = surfaceOf({ originX: 0, originY: 0, cellSize: 1000, width: 1, height: 1 }, () => 100);
     expect(ringDemand(one, 500, 500, 500)).toBeCloseTo(100 * Math.PI * 0.25, 12);
+  });
+
+  it('equals clipping every cell of an uneven surface one by one, also for rings reaching past the grid [D]', () => {
+    const rnd = randomSeeded(3).uniform;
+    const small: GridSpec = { originX: -1000, originY: 500, cellSize: 70, width: 90, height: 70 };
+    const s = surfaceOf(small, () => (rnd() < 0.1 ? 0 : rnd() * 100));
+    for (const [x, y, r] of [
+      [2000, 3000, 1234],
+      [-950, 560, 800],
+      [4000, 4000, 3000],
+      [2035, 2985, 35],
+      [2000, 3000, 10_000],
+    ]) {
+      let brute = 0;
+      for (let j = 0; j < small.height; j++)
+        for (let i = 0; i < small.width; i++) {
+          const xw = small.originX + i * small.cellSize;
+          const ys = small.originY + j * small.cellSize;
+          brute += s.values[i + j * small.width] * discRectOverlap(x, y, r, xw, ys, xw + small.cellSize, ys + small.cellSize);
+        }
+      expect(ringDemand(s, x, y, r)).toBeCloseTo(brute / 1e6, 9);
+    }
   });
 
   it('gives 0 outside the grid and rejects a non-positive radius', () => {

@@ -49,18 +49,35 @@ export function ringDemand(surface: ScoringSurface, x: number, y: number, radius
   for (let j = j0; j <= j1; j++) {
     const ys = originY + j * cellSize;
     const yn = ys + cellSize;
+    const row = j * width;
+    // Cells whose four corners lie in the disc are summed whole; only the others are clipped.
     const dyFar = Math.max(Math.abs(ys - y), Math.abs(yn - y));
     const dyNear = y < ys ? ys - y : y > yn ? y - yn : 0;
+    const hx = dyFar < radius ? Math.sqrt(r2 - dyFar * dyFar) : -1;
+    let f0 = i1 + 1;
+    let f1 = i1;
+    if (hx >= 0) {
+      f0 = Math.max(i0, Math.ceil((x - hx - originX) / cellSize));
+      f1 = Math.min(i1, Math.floor((x + hx - originX) / cellSize) - 1);
+      if (f1 < f0) {
+        f0 = i1 + 1;
+        f1 = i1;
+      }
+    }
+    let inner = 0;
+    for (let i = f0; i <= f1; i++) inner += values[row + i];
+    sum += inner * cellArea;
     for (let i = i0; i <= i1; i++) {
-      const v = values[i + j * width];
+      if (i === f0) {
+        i = f1;
+        continue;
+      }
+      const v = values[row + i];
       if (v === 0) continue;
       const xw = originX + i * cellSize;
-      const xe = xw + cellSize;
-      const dxFar = Math.max(Math.abs(xw - x), Math.abs(xe - x));
-      const dxNear = x < xw ? xw - x : x > xe ? x - xe : 0;
+      const dxNear = x < xw ? xw - x : x > xw + cellSize ? x - xw - cellSize : 0;
       if (dxNear * dxNear + dyNear * dyNear >= r2) continue;
-      const area = dxFar * dxFar + dyFar * dyFar <= r2 ? cellArea : discRectOverlap(x, y, radius, xw, ys, xe, yn);
-      sum += v * area;
+      sum += v * discRectOverlap(x, y, radius, xw, ys, xw + cellSize, yn);
     }
   }
   return sum / 1e6;
