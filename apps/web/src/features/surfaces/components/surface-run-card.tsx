@@ -1,6 +1,6 @@
-import { Alert, Button, ProgressBar } from '@demandscape/ui';
+import { Alert, Button, Dialog, ProgressBar } from '@demandscape/ui';
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { errorMessage } from '../../../lib/api-error';
 import { dateTimeText } from '../../../lib/format';
 import { useCancelSurface } from '../api/cancel-surface';
@@ -52,6 +52,7 @@ export function SurfaceRunCard({ orgId, workspaceId, surface: listed, canWrite, 
   const retry = useRetrySurface(orgId, workspaceId);
   const remove = useDeleteSurface(orgId, workspaceId);
   const wasActive = useRef(surfaceIsActive(s));
+  const [confirmDelete, setConfirmDelete] = useState(false);
 
   // When a run ends, the list (and anything showing results) should see it at once.
   useEffect(() => {
@@ -132,11 +133,25 @@ export function SurfaceRunCard({ orgId, workspaceId, surface: listed, canWrite, 
           </Button>
         ) : null}
         {canWrite && !active ? (
-          <Button size="sm" variant="ghost" className="text-danger hover:text-danger" onClick={() => remove.mutate(s.id)} isLoading={remove.isPending}>
+          <Button size="sm" variant="ghost" className="text-danger hover:text-danger" onClick={() => setConfirmDelete(true)}>
             Delete
           </Button>
         ) : null}
       </div>
+      <Dialog open={confirmDelete} onClose={() => setConfirmDelete(false)} title="Delete this demand surface?">
+        <p className="text-sm text-ink">
+          “{s.name}” and its map layer, contours and numbers will be deleted for everyone in the workspace. Credits already
+          spent are not returned. This cannot be undone.
+        </p>
+        <div className="flex justify-end gap-2">
+          <Button variant="ghost" onClick={() => setConfirmDelete(false)}>
+            Keep it
+          </Button>
+          <Button variant="danger" isLoading={remove.isPending} onClick={() => remove.mutate(s.id, { onSettled: () => setConfirmDelete(false) })}>
+            Delete surface
+          </Button>
+        </div>
+      </Dialog>
     </article>
   );
 }

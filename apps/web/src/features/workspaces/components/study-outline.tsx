@@ -58,22 +58,24 @@ export function StudyOutline({ states = {}, activeKey, onSelect, selectable = []
         const state = states[step.key];
         const canOpen = onSelect !== undefined && selectable.includes(step.key);
         const active = activeKey === step.key;
+        // Inside a button only phrasing content is valid, so the step's text is built from spans.
+        const Title = canOpen ? 'span' : 'h3';
         const body = (
           <>
-          <span
-            aria-hidden="true"
-            className={`flex size-7 shrink-0 items-center justify-center rounded-full border text-xs font-semibold ${active ? 'border-accent bg-accent text-on-accent' : 'border-line-strong text-ink-muted'}`}
-          >
-            {index + 1}
-          </span>
-          <div className="min-w-0 flex-1">
-            <div className="flex items-center justify-between gap-2">
-              <h3 className="text-sm font-semibold text-ink">{step.title}</h3>
-              <Badge tone={state?.tone}>{state?.label ?? 'Not started'}</Badge>
-            </div>
-            <p className="mt-1 text-xs text-ink-muted">{state?.detail ?? step.summary}</p>
-            <p className="mt-1 text-xs text-ink-faint">{step.by}</p>
-          </div>
+            <span
+              aria-hidden="true"
+              className={`flex size-7 shrink-0 items-center justify-center rounded-full border text-xs font-semibold ${active ? 'border-accent bg-accent text-on-accent' : 'border-line-strong text-ink-muted'}`}
+            >
+              {index + 1}
+            </span>
+            <span className="block min-w-0 flex-1">
+              <span className="flex items-center justify-between gap-2">
+                <Title className="text-sm font-semibold text-ink">{step.title}</Title>
+                <Badge tone={state?.tone}>{state?.label ?? 'Not started'}</Badge>
+              </span>
+              <span className="mt-1 block text-xs text-ink-muted">{state?.detail ?? step.summary}</span>
+              <span className="mt-1 block text-xs text-ink-faint">{step.by}</span>
+            </span>
           </>
         );
         return (

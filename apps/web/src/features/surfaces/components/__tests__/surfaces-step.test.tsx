@@ -79,4 +79,26 @@ describe('SurfacesStep', () => {
     expect(screen.queryByRole('button', { name: 'Retry' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Delete' })).not.toBeInTheDocument();
   });
+
+  it('asks before deleting a finished run, then removes it', async () => {
+    let deleted = false;
+    const done = createSurface({ status: 'cancelled', progress: 0.2 });
+    server.use(
+      http.get(base, () => HttpResponse.json({ surfaces: deleted ? [] : [done] })),
+      http.get(`${base}/srf_1`, () => HttpResponse.json({ surface: done })),
+      http.post(`${base}/estimate`, () => HttpResponse.json({ error: { code: 'X', message: 'not needed' } }, { status: 400 })),
+      http.delete(`${base}/srf_1`, () => {
+        deleted = true;
+        return new HttpResponse(null, { status: 204 });
+      }),
+    );
+    renderWithProviders(
+      <SurfacesStep orgId="org_1" workspaceId="wsp_1" sources={[createSurfaceSource()]} canWrite selectedId={null} onSelect={() => {}} />,
+    );
+    await userEvent.click(await screen.findByRole('button', { name: 'Delete' }));
+    expect(deleted).toBe(false);
+    await userEvent.click(await screen.findByRole('button', { name: 'Delete surface' }));
+    expect(await screen.findByText(/No demand surfaces yet/)).toBeInTheDocument();
+    expect(deleted).toBe(true);
+  });
 });
