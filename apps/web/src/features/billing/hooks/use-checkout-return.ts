@@ -6,7 +6,7 @@ import { getBilling } from '../api/get-billing';
 import { getLedger } from '../api/get-ledger';
 import type { BillingOverview } from '../types';
 import { checkoutPendingTake, type CheckoutPending } from '../utils/checkout-pending';
-import { countText } from '../utils/money-text';
+import { countText, moneyText } from '../utils/money-text';
 
 /** How long the page waits for the provider's confirmation before it says so (ms). */
 export const CONFIRMATION_WAIT_MS = 60_000;
@@ -80,7 +80,11 @@ export function useCheckoutReturn(orgId: string): { waiting: boolean; timedOut: 
           : pending?.credits
             ? `${countText(pending.credits)} credits added`
             : 'Credits added';
-      notify({ tone: 'success', title, message: `The balance is now ${countText(check.data.billing.credits.balance)} credits.` });
+      const message =
+        pending?.kind === 'seats'
+          ? `${moneyText(check.data.billing.plan.seatsPaid * check.data.billing.seatPlan.unitAmount, check.data.billing.seatPlan.currency)} per ${check.data.billing.seatPlan.interval} from now on.`
+          : `The balance is now ${countText(check.data.billing.credits.balance)} credits.`;
+      notify({ tone: 'success', title, message });
       setWaiting(null);
     }
   }, [state, check.data, waiting, queryClient, orgId]);

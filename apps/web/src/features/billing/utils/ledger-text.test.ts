@@ -4,10 +4,10 @@ import { signedCreditsText } from './money-text';
 
 describe('ledgerReferenceText', () => {
   it('names grants by reason, purchases by pack and runs by id', () => {
-    expect(ledgerReferenceText({ kind: 'grant', ref: 'welcome', details: { reason: 'Welcome credits' } })).toBe('Welcome credits');
-    expect(ledgerReferenceText({ kind: 'purchase', ref: 'cs_test_1', details: { pack: 'pack-500' } })).toBe('Credit pack pack-500');
-    expect(ledgerReferenceText({ kind: 'reservation', ref: 'surface:srf_9:m1', details: { cost: 12 } })).toBe('Demand surface run srf_9');
-    expect(ledgerReferenceText({ kind: 'release', ref: 'other', details: null })).toBe('other');
+    expect(ledgerReferenceText({ kind: 'grant', amount: 20, ref: 'welcome', details: { reason: 'Welcome credits' } })).toBe('Welcome credits');
+    expect(ledgerReferenceText({ kind: 'purchase', amount: 2000, ref: 'cs_test_1', details: { pack: 'pack-2000' } })).toBe('2,000-credit pack');
+    expect(ledgerReferenceText({ kind: 'reservation', amount: -12, ref: 'surface:srf_9:m1', details: { cost: 12 } })).toBe('Demand surface run srf_9');
+    expect(ledgerReferenceText({ kind: 'release', amount: 12, ref: 'other', details: null })).toBe('other');
   });
 });
 
