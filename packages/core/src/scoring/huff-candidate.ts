@@ -52,7 +52,7 @@ export function huffCandidate(grid: HuffGrid, candidate: Site, breakdown: boolea
       const dy = yKm[c] - sy;
       let d2 = dx * dx + dy * dy;
       if (d2 < minDistanceSqKm) d2 = minDistanceSqKm;
-      const t = beta === 2 ? a / d2 : a * Math.pow(d2, half);
+      const t = beta === 2 ? a / d2 : a * Math.exp(half * Math.log(d2));
       const share = t / (denominator[c] + t);
       captured += demand[c] * share;
       cannibalization += ownDemand[c] * share;

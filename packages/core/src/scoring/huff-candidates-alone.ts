@@ -15,7 +15,7 @@ export interface HuffCandidatesAlone {
  * Scores every candidate as if it alone were added to today's network — the same numbers as
  * {@link huffCandidate} without the per-store split, organised for speed:
  * - P_cj = t/(S + t) with t = A^α d^(−β) is computed as A^α / (A^α + S·d^β): one division a
- *   cell, and for β = 2 no power at all (d^β = d²);
+ *   cell, and for β = 2 no power at all (d^β = d²; other β use exp(β/2 · ln d²));
  * - the demand cells are walked in blocks of ~6k and every candidate visits a block before the
  *   next is loaded, so the per-cell arrays stream from memory once instead of once per
  *   candidate (1e6 cells are 40 MB — more than any cache).
@@ -60,7 +60,8 @@ export function huffCandidatesAlone(grid: HuffGrid, candidates: readonly Site[],
         for (let c = c0; c < c1; c++) {
           const dx = xKm[c] - xk;
           const dy = yKm[c] - yk;
-          const share = ak / (ak + denominator[c] * Math.pow(Math.max(minDistanceSqKm, dx * dx + dy * dy), halfBeta));
+          // exp(k·ln u) is about twice as fast as Math.pow(u, k) in V8 (measured), same accuracy here.
+          const share = ak / (ak + denominator[c] * Math.exp(halfBeta * Math.log(Math.max(minDistanceSqKm, dx * dx + dy * dy))));
           cap += demand[c] * share;
           can += ownDemand[c] * share;
         }

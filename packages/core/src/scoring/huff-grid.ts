@@ -32,7 +32,7 @@ export interface HuffGrid {
 
 /**
  * Adds (or, with `into` = undefined, writes) the Huff term A^α d^(−β) of a store at (sx, sy) km
- * for every cell. β = 2 avoids Math.pow; other β use (d²)^(−β/2).
+ * for every cell. β = 2 avoids powers; other β use (d²)^(−β/2) as exp(−β/2 · ln d²).
  *
  * @param grid the precomputed grid (only cells and settings are read)
  * @param site the store
@@ -63,7 +63,7 @@ export function huffTermsInto(grid: Pick<HuffGrid, 'xKm' | 'yKm' | 'alpha' | 'be
     const dx = xKm[c] - sx;
     const dy = yKm[c] - sy;
     const d2 = dx * dx + dy * dy;
-    out[c] += a * Math.pow(d2 < minDistanceSqKm ? minDistanceSqKm : d2, half);
+    out[c] += a * Math.exp(half * Math.log(d2 < minDistanceSqKm ? minDistanceSqKm : d2)); // faster than Math.pow in V8
   }
 }
 

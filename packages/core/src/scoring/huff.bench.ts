@@ -75,7 +75,7 @@ push('per-own-store split, 10 candidates', `10 × ${side}² × (1 + ${nOwn})`, t
 const rings = timed(() => candidates.map((c) => ringDemands(surface, c.x, c.y)));
 push('rings 1 / 3 / 5 km', `${nCand} candidates`, rings);
 const gridB = timed(() => huffGrid(surface, own, competitors, { beta: 2.5 }));
-push('base denominator, β = 2.5 (Math.pow)', `${side}² cells × ${nOwn + nComp} stores`, gridB);
+push('base denominator, β = 2.5 (exp·ln)', `${side}² cells × ${nOwn + nComp} stores`, gridB);
 const allB = timed(() => huffCandidatesAlone(gridB.value, candidates.slice(0, 100)));
 push('100 candidates alone, β = 2.5', `100 × ${side}² cells`, allB);
 
