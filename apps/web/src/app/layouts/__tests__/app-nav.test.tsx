@@ -14,6 +14,17 @@ describe('AppNav', () => {
     expect(within(nav).getByRole('link', { name: 'Workspaces' })).toHaveAttribute('href', '/orgs/org_1/workspaces');
     expect(within(nav).getByRole('link', { name: 'Members' })).toBeInTheDocument();
     expect(within(nav).queryByRole('link', { name: 'Audit log' })).not.toBeInTheDocument();
+    expect(within(nav).queryByRole('link', { name: 'Billing' })).not.toBeInTheDocument();
+  });
+
+  it('shows billing to owners only', () => {
+    for (const role of ['analyst', 'planner'] as const) {
+      const { unmount } = renderWithProviders(<AppNav orgId="org_1" role={role} />);
+      expect(screen.queryByRole('link', { name: 'Billing' })).not.toBeInTheDocument();
+      unmount();
+    }
+    renderWithProviders(<AppNav orgId="org_1" role="owner" />);
+    expect(screen.getByRole('link', { name: 'Billing' })).toHaveAttribute('href', '/orgs/org_1/billing');
   });
 
   it('shows the audit log to an owner', () => {
