@@ -52,14 +52,37 @@ try {
   await csvWrite(csv, ROWS);
   const sizeMb = statSync(csv).size / 1024 / 1024;
   const ds = await createApp(
-    configFromEnv({ NODE_ENV: 'test', DATA_DIR: dir, DATABASE_FILE: join(dir, 'bench.sqlite'), RATE_LIMIT_AUTH_PER_MINUTE: '1000', WEB_DIST: '/nonexistent', UPLOAD_MAX_BYTES: String(1024 * 1024 * 1024) }),
+    configFromEnv({
+      NODE_ENV: 'test',
+      DATA_DIR: dir,
+      DATABASE_FILE: join(dir, 'bench.sqlite'),
+      RATE_LIMIT_AUTH_PER_MINUTE: '1000',
+      WEB_DIST: '/nonexistent',
+      UPLOAD_MAX_BYTES: String(1024 * 1024 * 1024),
+    }),
   );
   const agent = request.agent(ds.app);
   let token = (await agent.get('/api/auth/csrf')).body.csrfToken as string;
-  await agent.post('/api/auth/sign-up').set('x-csrf-token', token).send({ email: 'bench@larchloaf.example', password: 'quillport-harbour-27', name: 'Bench' }).expect(201);
+  await agent
+    .post('/api/auth/sign-up')
+    .set('x-csrf-token', token)
+    .send({ email: 'bench@larchloaf.example', password: 'quillport-harbour-27', name: 'Bench' })
+    .expect(201);
   token = (await agent.get('/api/auth/csrf')).body.csrfToken;
-  const org = (await agent.post('/api/organizations').set('x-csrf-token', token).send({ name: 'Bench' }).expect(201)).body.organization.id;
-  const ws = (await agent.post(`/api/organizations/${org}/workspaces`).set('x-csrf-token', token).send({ name: 'Bench' }).expect(201)).body.workspace.id;
+  const org = (
+    await agent
+      .post('/api/organizations')
+      .set('x-csrf-token', token)
+      .send({ name: 'Bench' })
+      .expect(201)
+  ).body.organization.id;
+  const ws = (
+    await agent
+      .post(`/api/organizations/${org}/workspaces`)
+      .set('x-csrf-token', token)
+      .send({ name: 'Bench' })
+      .expect(201)
+  ).body.workspace.id;
   const base = `/api/organizations/${org}/workspaces/${ws}/customer-files`;
 
   global.gc?.();
@@ -71,7 +94,11 @@ try {
   const t1 = performance.now();
   const c1 = process.cpuUsage();
   const id = up.body.customerFile.id;
-  await agent.post(`${base}/${id}/import`).set('x-csrf-token', token).send({ mapping: { lon: 'lon', lat: 'lat', weight: 'spend' }, weightKind: 'spend' }).expect(202);
+  await agent
+    .post(`${base}/${id}/import`)
+    .set('x-csrf-token', token)
+    .send({ mapping: { lon: 'lon', lat: 'lat', weight: 'spend' }, weightKind: 'spend' })
+    .expect(202);
   let file;
   for (;;) {
     file = (await agent.get(`${base}/${id}`)).body.customerFile;
@@ -82,19 +109,31 @@ try {
   const t2 = performance.now();
   const c2 = process.cpuUsage();
   clearInterval(sampler);
-  if (file.status !== 'imported') throw new Error(`import ${file.status}: ${JSON.stringify(file.error)}`);
+  if (file.status !== 'imported')
+    throw new Error(`import ${file.status}: ${JSON.stringify(file.error)}`);
   await ds.close();
 
   const s = (ms: number) => (ms / 1000).toFixed(2);
   const mb = (b: number) => (b / 1024 / 1024).toFixed(0);
-  const cpu = (a: NodeJS.CpuUsage, b: NodeJS.CpuUsage) => ((b.user - a.user + b.system - a.system) / 1e6).toFixed(2);
-  console.log(`\nCustomer-file import, ${ROWS.toLocaleString('en')} rows, ${sizeMb.toFixed(1)} MB CSV (lon, lat, spend + a name column that is discarded), SQLite file database\n`);
+  const cpu = (a: NodeJS.CpuUsage, b: NodeJS.CpuUsage) =>
+    ((b.user - a.user + b.system - a.system) / 1e6).toFixed(2);
+  console.log(
+    `\nCustomer-file import, ${ROWS.toLocaleString('en')} rows, ${sizeMb.toFixed(1)} MB CSV (lon, lat, spend + a name column that is discarded), SQLite file database\n`,
+  );
   console.log('| phase | wall (s) | CPU (s) | rows/s (wall) | notes |');
   console.log('|---|---:|---:|---:|---|');
-  console.log(`| upload (HTTP multipart → disk, encoding scan, detection, preview) | ${s(t1 - t0)} | ${cpu(c0, c1)} | – | ${sizeMb.toFixed(1)} MB |`);
-  console.log(`| import (parse, validate, outliers, pack, write chunks) | ${s(t2 - t1)} | ${cpu(c1, c2)} | ${Math.round(ROWS / ((t2 - t1) / 1000)).toLocaleString('en')} | ${file.acceptedCount.toLocaleString('en')} accepted, ${file.rejectedCount} rejected, ${file.flaggedCount} flagged |`);
-  console.log(`| total | ${s(t2 - t0)} | ${cpu(c0, c2)} | ${Math.round(ROWS / ((t2 - t0) / 1000)).toLocaleString('en')} | target < 20 s |`);
-  console.log(`\npeak RSS ${mb(peakRss)} MB (before upload ${mb(rssBefore)} MB; target < 1024 MB); Node ${process.version}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores\n`);
+  console.log(
+    `| upload (HTTP multipart → disk, encoding scan, detection, preview) | ${s(t1 - t0)} | ${cpu(c0, c1)} | – | ${sizeMb.toFixed(1)} MB |`,
+  );
+  console.log(
+    `| import (parse, validate, outliers, pack, write chunks) | ${s(t2 - t1)} | ${cpu(c1, c2)} | ${Math.round(ROWS / ((t2 - t1) / 1000)).toLocaleString('en')} | ${file.acceptedCount.toLocaleString('en')} accepted, ${file.rejectedCount} rejected, ${file.flaggedCount} flagged |`,
+  );
+  console.log(
+    `| total | ${s(t2 - t0)} | ${cpu(c0, c2)} | ${Math.round(ROWS / ((t2 - t0) / 1000)).toLocaleString('en')} | target < 20 s |`,
+  );
+  console.log(
+    `\npeak RSS ${mb(peakRss)} MB (before upload ${mb(rssBefore)} MB; target < 1024 MB); Node ${process.version}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores\n`,
+  );
 } finally {
   clearInterval(sampler);
   rmSync(dir, { recursive: true, force: true });

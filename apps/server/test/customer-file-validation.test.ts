@@ -1,6 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { customerPointsLoad } from '../src/modules/customer-file/customer-points.js';
-import { customerFileImported, customerFileSetup, customerFileUpload, fixture, type CustomerFileSetup } from './fixtures/customer-files/helpers.js';
+import {
+  customerFileImported,
+  customerFileSetup,
+  customerFileUpload,
+  fixture,
+  type CustomerFileSetup,
+} from './fixtures/customer-files/helpers.js';
 
 // validation-reasons.csv: header (row 1), two good rows (2, 3), one row per reject reason (4–13),
 // an exact copy of row 2 (row 14), 20 good rows on a 0.02° ring around the centre (15–34) and one
@@ -25,41 +31,84 @@ describe('customer file validation report', () => {
   afterAll(() => s.close());
 
   it('counts every reason exactly; flagged rows are kept; nothing is silently dropped', async () => {
-    const up = await customerFileUpload(s.owner, s.base, 'reasons.csv', fixture('validation-reasons.csv')).expect(201);
+    const up = await customerFileUpload(
+      s.owner,
+      s.base,
+      'reasons.csv',
+      fixture('validation-reasons.csv'),
+    ).expect(201);
     const f = await customerFileImported(s.owner, s.base, up.body.customerFile.id, MAPPING);
-    expect(f).toMatchObject({ status: 'imported', rowCount: 34, acceptedCount: 24, rejectedCount: 10, flaggedCount: 2, excludedCount: 0 });
+    expect(f).toMatchObject({
+      status: 'imported',
+      rowCount: 34,
+      acceptedCount: 24,
+      rejectedCount: 10,
+      flaggedCount: 2,
+      excludedCount: 0,
+    });
     expect(f.acceptedCount + f.rejectedCount + f.excludedCount).toBe(f.rowCount);
     expect(f.report!.rejected).toEqual(REJECTED);
     expect(f.report!.flagged).toEqual({ 'duplicate-row': 1, outlier: 1 });
-    expect(f.report!.examples['likely-swapped']).toEqual([{ row: 8, lon: '30.2', lat: '120.5', weight: '10' }]);
+    expect(f.report!.examples['likely-swapped']).toEqual([
+      { row: 8, lon: '30.2', lat: '120.5', weight: '10' },
+    ]);
     expect(f.report!.examples['missing-coordinate']).toEqual([
       { row: 4, lon: '-38.5', lat: '', weight: '50' },
       { row: 5, lon: '', lat: '44.5', weight: '50' },
     ]);
-    expect(f.report!.examples['duplicate-row']).toEqual([{ row: 14, lon: '-38.50000', lat: '44.50000', weight: '100' }]);
+    expect(f.report!.examples['duplicate-row']).toEqual([
+      { row: 14, lon: '-38.50000', lat: '44.50000', weight: '100' },
+    ]);
     expect(f.report!.examples.outlier).toEqual([{ row: 35, lon: '-30', lat: '46', weight: '10' }]);
-    expect(f.report!.outlierRule).toMatchObject({ applied: true, centerLon: expect.closeTo(-38.5, 1), centerLat: expect.closeTo(44.5, 1) });
+    expect(f.report!.outlierRule).toMatchObject({
+      applied: true,
+      centerLon: expect.closeTo(-38.5, 1),
+      centerLat: expect.closeTo(44.5, 1),
+    });
     const points = await customerPointsLoad(s.ds.orm.em.fork(), f.id);
     expect(points.count).toBe(24);
   });
 
   it('leaves flagged rows out when asked, counting them as excluded', async () => {
-    const up = await customerFileUpload(s.owner, s.base, 'reasons.csv', fixture('validation-reasons.csv')).expect(201);
-    const f = await customerFileImported(s.owner, s.base, up.body.customerFile.id, { ...MAPPING, excludeFlagged: true });
-    expect(f).toMatchObject({ status: 'imported', rowCount: 34, acceptedCount: 22, rejectedCount: 10, flaggedCount: 2, excludedCount: 2, excludeFlagged: true });
+    const up = await customerFileUpload(
+      s.owner,
+      s.base,
+      'reasons.csv',
+      fixture('validation-reasons.csv'),
+    ).expect(201);
+    const f = await customerFileImported(s.owner, s.base, up.body.customerFile.id, {
+      ...MAPPING,
+      excludeFlagged: true,
+    });
+    expect(f).toMatchObject({
+      status: 'imported',
+      rowCount: 34,
+      acceptedCount: 22,
+      rejectedCount: 10,
+      flaggedCount: 2,
+      excludedCount: 2,
+      excludeFlagged: true,
+    });
     const points = await customerPointsLoad(s.ds.orm.em.fork(), f.id);
     expect(points.count).toBe(22);
     expect(Math.max(...points.lon)).toBeLessThan(-38);
   });
 
   it('writes the rejected rows as CSV with only the mapped columns', async () => {
-    const up = await customerFileUpload(s.owner, s.base, 'reasons.csv', fixture('validation-reasons.csv')).expect(201);
+    const up = await customerFileUpload(
+      s.owner,
+      s.base,
+      'reasons.csv',
+      fixture('validation-reasons.csv'),
+    ).expect(201);
     const id = up.body.customerFile.id;
     await s.owner.get(`${s.base}/${id}/rejected.csv`).expect(409);
     await customerFileImported(s.owner, s.base, id, MAPPING);
     const res = await s.owner.get(`${s.base}/${id}/rejected.csv`).expect(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
-    expect(res.headers['content-disposition']).toBe('attachment; filename="reasons-rejected-rows.csv"');
+    expect(res.headers['content-disposition']).toBe(
+      'attachment; filename="reasons-rejected-rows.csv"',
+    );
     expect(res.text).toBe(
       [
         'row,reason,lon,lat,spend',
@@ -77,17 +126,35 @@ describe('customer file validation report', () => {
       ].join('\r\n'),
     );
     expect(res.text).not.toMatch(/Cy Harbour|Ed Gull/);
-    const audit = await s.owner.get(`/api/organizations/${s.orgId}/audit-events?action=customer_file.rejected_download`).expect(200);
-    expect(audit.body.events[0]).toMatchObject({ action: 'customer_file.rejected_download', target: { type: 'customer_file', id }, details: { rejectedCount: 10 } });
+    const audit = await s.owner
+      .get(`/api/organizations/${s.orgId}/audit-events?action=customer_file.rejected_download`)
+      .expect(200);
+    expect(audit.body.events[0]).toMatchObject({
+      action: 'customer_file.rejected_download',
+      target: { type: 'customer_file', id },
+      details: { rejectedCount: 10 },
+    });
   });
 
   it('records upload, import and delete in the audit log', async () => {
-    const up = await customerFileUpload(s.owner, s.base, 'audit.csv', fixture('utf8-bom.csv')).expect(201);
+    const up = await customerFileUpload(
+      s.owner,
+      s.base,
+      'audit.csv',
+      fixture('utf8-bom.csv'),
+    ).expect(201);
     const id = up.body.customerFile.id;
-    await customerFileImported(s.owner, s.base, id, { mapping: { lon: 'lon', lat: 'lat' }, weightKind: 'count' });
+    await customerFileImported(s.owner, s.base, id, {
+      mapping: { lon: 'lon', lat: 'lat' },
+      weightKind: 'count',
+    });
     await s.owner.del(`${s.base}/${id}`).expect(204);
-    const res = await s.owner.get(`/api/organizations/${s.orgId}/audit-events?limit=200`).expect(200);
-    const mine = res.body.events.filter((e: { target: { id: string } | null }) => e.target?.id === id).map((e: { action: string }) => e.action);
+    const res = await s.owner
+      .get(`/api/organizations/${s.orgId}/audit-events?limit=200`)
+      .expect(200);
+    const mine = res.body.events
+      .filter((e: { target: { id: string } | null }) => e.target?.id === id)
+      .map((e: { action: string }) => e.action);
     expect(mine).toEqual(['customer_file.delete', 'customer_file.import', 'customer_file.upload']);
   });
 });

@@ -1,6 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DemandscapeApp } from '../src/app.js';
-import { testAppCreate, testClient, testMembershipAdd, testUserSignedIn, type TestClient } from './utils.js';
+import {
+  testAppCreate,
+  testClient,
+  testMembershipAdd,
+  testUserSignedIn,
+  type TestClient,
+} from './utils.js';
 import { customerFileImported, fixture } from './fixtures/customer-files/helpers.js';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -30,9 +36,28 @@ const MATRIX: RouteRow[] = [
   { method: 'UPLOAD', route: ':base', allowed: WRITERS, ok: 201 },
   { method: 'GET', route: ':base/:fileId', allowed: ROLES_ALL, ok: 200, file: 'imported' },
   { method: 'GET', route: ':base/:fileId/preview', allowed: WRITERS, ok: 200, file: 'fresh' },
-  { method: 'POST', route: ':base/:fileId/import', body: { mapping: { lon: 'lon', lat: 'lat' }, weightKind: 'count' }, allowed: WRITERS, ok: 202, file: 'fresh' },
-  { method: 'GET', route: ':base/:fileId/rejected.csv', allowed: WRITERS, ok: 200, file: 'imported' },
-  { method: 'GET', route: ':base/:fileId/aggregate?zoom=12', allowed: WRITERS, ok: 200, file: 'imported' },
+  {
+    method: 'POST',
+    route: ':base/:fileId/import',
+    body: { mapping: { lon: 'lon', lat: 'lat' }, weightKind: 'count' },
+    allowed: WRITERS,
+    ok: 202,
+    file: 'fresh',
+  },
+  {
+    method: 'GET',
+    route: ':base/:fileId/rejected.csv',
+    allowed: WRITERS,
+    ok: 200,
+    file: 'imported',
+  },
+  {
+    method: 'GET',
+    route: ':base/:fileId/aggregate?zoom=12',
+    allowed: WRITERS,
+    ok: 200,
+    file: 'imported',
+  },
   { method: 'DELETE', route: ':base/:fileId', allowed: WRITERS, ok: 204, file: 'fresh' },
 ];
 
@@ -50,7 +75,11 @@ describe('role matrix: customer files', () => {
   let base: string;
   let importedId: string;
 
-  const upload = (client: TestClient, url: string) => client.agent.post(url).set('x-csrf-token', client.token).attach('file', fixture('utf8-bom.csv'), 'm.csv');
+  const upload = (client: TestClient, url: string) =>
+    client.agent
+      .post(url)
+      .set('x-csrf-token', client.token)
+      .attach('file', fixture('utf8-bom.csv'), 'm.csv');
   async function freshFile(): Promise<string> {
     return (await upload(clients.owner, base).expect(201)).body.customerFile.id;
   }
@@ -60,7 +89,8 @@ describe('role matrix: customer files', () => {
     ds = await testAppCreate({ DATA_DIR: dataDir });
     const owner = await testUserSignedIn(ds, 'owner@cf-matrix.example', 'Owner A');
     clients.owner = owner.client;
-    const orgA = (await owner.client.post('/api/organizations', { name: 'Org A' }).expect(201)).body.organization.id as string;
+    const orgA = (await owner.client.post('/api/organizations', { name: 'Org A' }).expect(201)).body
+      .organization.id as string;
     for (const role of ['analyst', 'planner', 'executive'] as const) {
       const u = await testUserSignedIn(ds, `${role}@cf-matrix.example`, `${role} A`);
       await testMembershipAdd(ds, orgA, u.userId, role);
@@ -70,10 +100,17 @@ describe('role matrix: customer files', () => {
     clients.outsider = outsider.client;
     await outsider.client.post('/api/organizations', { name: 'Org B' }).expect(201);
     clients.anonymous = await testClient(ds);
-    const ws = (await owner.client.post(`/api/organizations/${orgA}/workspaces`, { name: 'A study' }).expect(201)).body.workspace.id;
+    const ws = (
+      await owner.client
+        .post(`/api/organizations/${orgA}/workspaces`, { name: 'A study' })
+        .expect(201)
+    ).body.workspace.id;
     base = `/api/organizations/${orgA}/workspaces/${ws}/customer-files`;
     importedId = await freshFile();
-    await customerFileImported(clients.owner, base, importedId, { mapping: { lon: 'lon', lat: 'lat', weight: 'visits' }, weightKind: 'visits' });
+    await customerFileImported(clients.owner, base, importedId, {
+      mapping: { lon: 'lon', lat: 'lat', weight: 'visits' },
+      weightKind: 'visits',
+    });
   });
   afterAll(async () => {
     await ds.close();
@@ -89,10 +126,17 @@ describe('role matrix: customer files', () => {
         const path = row.route.replace(':base', base).replace(':fileId', fileId);
         const c = clients[caller];
         const res =
-          row.method === 'UPLOAD' ? await upload(c, path) : row.method === 'GET' ? await c.get(path) : row.method === 'POST' ? await c.post(path, row.body) : await c.del(path);
+          row.method === 'UPLOAD'
+            ? await upload(c, path)
+            : row.method === 'GET'
+              ? await c.get(path)
+              : row.method === 'POST'
+                ? await c.post(path, row.body)
+                : await c.del(path);
         actual[caller] = res.status;
         expected[caller] = expectedStatus(row, caller);
-        if (res.status >= 400) expect(res.body.error?.code, `${caller}: error body`).toBeTypeOf('string');
+        if (res.status >= 400)
+          expect(res.body.error?.code, `${caller}: error body`).toBeTypeOf('string');
       }
       expect(actual).toEqual(expected);
     });

@@ -17,7 +17,8 @@ describe('cellNumber', () => {
     expect(cellNumber('', false)).toBeNull();
     expect(cellNumber('   ', false)).toBeNull();
     expect(cellNumber(undefined, false)).toBeNull();
-    for (const text of ['abc', '0x10', 'Infinity', '1,234.5', '12 345', '1e999']) expect(cellNumber(text, false), text).toBeNaN();
+    for (const text of ['abc', '0x10', 'Infinity', '1,234.5', '12 345', '1e999'])
+      expect(cellNumber(text, false), text).toBeNaN();
   });
 });
 

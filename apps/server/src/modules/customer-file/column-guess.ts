@@ -1,13 +1,67 @@
 import type { ColumnMapping } from './customer-file.entity.js';
 
 // Header words (lower case, accents removed) in English, German, French, Spanish, Italian, Dutch.
-const LAT_WORDS = ['lat', 'latitude', 'breite', 'breitengrad', 'latitud', 'latitudine', 'breedte', 'breedtegraad', 'ycoord', 'geolat', 'wgs84lat'];
-const LON_WORDS = ['lon', 'lng', 'long', 'longitude', 'lange', 'laenge', 'langengrad', 'laengengrad', 'longitud', 'longitudine', 'lengte', 'lengtegraad', 'xcoord', 'geolon', 'wgs84lon'];
+const LAT_WORDS = [
+  'lat',
+  'latitude',
+  'breite',
+  'breitengrad',
+  'latitud',
+  'latitudine',
+  'breedte',
+  'breedtegraad',
+  'ycoord',
+  'geolat',
+  'wgs84lat',
+];
+const LON_WORDS = [
+  'lon',
+  'lng',
+  'long',
+  'longitude',
+  'lange',
+  'laenge',
+  'langengrad',
+  'laengengrad',
+  'longitud',
+  'longitudine',
+  'lengte',
+  'lengtegraad',
+  'xcoord',
+  'geolon',
+  'wgs84lon',
+];
 // In order of preference: money first, then visits, then generic counts and weights.
 const WEIGHT_WORDS = [
-  'spend', 'sales', 'revenue', 'umsatz', 'ventas', 'montant', 'amount', 'betrag', 'importe', 'turnover', 'omzet',
-  'visits', 'besuche', 'visites', 'visitas', 'bezoeken', 'orders', 'bestellungen',
-  'count', 'anzahl', 'nombre', 'cantidad', 'aantal', 'weight', 'gewicht', 'poids', 'peso', 'value', 'wert',
+  'spend',
+  'sales',
+  'revenue',
+  'umsatz',
+  'ventas',
+  'montant',
+  'amount',
+  'betrag',
+  'importe',
+  'turnover',
+  'omzet',
+  'visits',
+  'besuche',
+  'visites',
+  'visitas',
+  'bezoeken',
+  'orders',
+  'bestellungen',
+  'count',
+  'anzahl',
+  'nombre',
+  'cantidad',
+  'aantal',
+  'weight',
+  'gewicht',
+  'poids',
+  'peso',
+  'value',
+  'wert',
 ];
 
 /**
@@ -26,7 +80,12 @@ export function headerWords(header: string): string[] {
     .filter((w) => w !== '');
 }
 
-function columnFor(columns: string[], words: string[], exactOnly: string[], taken: Set<string>): string | undefined {
+function columnFor(
+  columns: string[],
+  words: string[],
+  exactOnly: string[],
+  taken: Set<string>,
+): string | undefined {
   for (const word of words) {
     for (const c of columns) {
       if (taken.has(c)) continue;
@@ -37,7 +96,8 @@ function columnFor(columns: string[], words: string[], exactOnly: string[], take
   for (const word of words) {
     for (const c of columns) if (!taken.has(c) && headerWords(c).includes(word)) return c;
   }
-  for (const word of exactOnly) for (const c of columns) if (!taken.has(c) && headerWords(c).join('') === word) return c;
+  for (const word of exactOnly)
+    for (const c of columns) if (!taken.has(c) && headerWords(c).join('') === word) return c;
   return undefined;
 }
 

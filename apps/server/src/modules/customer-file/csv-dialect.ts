@@ -24,7 +24,11 @@ const DECIMAL_POINT = /^[+-]?\d+\.\d+$/;
  */
 export function csvDialectDetect(lines: string[]): CsvDialect {
   const sample = lines.filter((l) => l.trim() !== '').slice(0, 50);
-  let best: { delimiter: string; score: number; fields: number } = { delimiter: ',', score: -1, fields: 0 };
+  let best: { delimiter: string; score: number; fields: number } = {
+    delimiter: ',',
+    score: -1,
+    fields: 0,
+  };
   for (const d of CSV_DELIMITERS) {
     const counts = sample.map((l) => l.replace(QUOTED, '').split(d).length - 1);
     const modal = counts.length > 0 ? mode(counts) : 0;
@@ -52,6 +56,7 @@ function mode(values: number[]): number {
   for (const v of values) tally.set(v, (tally.get(v) ?? 0) + 1);
   let best = 0;
   let bestCount = 0;
-  for (const [v, c] of tally) if (c > bestCount || (c === bestCount && v > best)) [best, bestCount] = [v, c];
+  for (const [v, c] of tally)
+    if (c > bestCount || (c === bestCount && v > best)) [best, bestCount] = [v, c];
   return best;
 }

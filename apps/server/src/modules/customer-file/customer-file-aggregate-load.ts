@@ -15,8 +15,17 @@ import { customerPointsLoad } from './customer-points.js';
  * @example
  * const fc = await customerFileAggregate(em, scope, id, 12);
  */
-export async function customerFileAggregate(em: EntityManager, scope: CustomerFileScope, fileId: string, zoom: number): Promise<CustomerAggregate> {
+export async function customerFileAggregate(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+  zoom: number,
+): Promise<CustomerAggregate> {
   const f = await customerFileLoad(em, scope, fileId);
-  if (f.status !== 'imported') throw new ConflictError('NOT_IMPORTED', `This file is ${f.status}; the customer map is available once it is imported.`);
+  if (f.status !== 'imported')
+    throw new ConflictError(
+      'NOT_IMPORTED',
+      `This file is ${f.status}; the customer map is available once it is imported.`,
+    );
   return customerAggregate(await customerPointsLoad(em.fork(), f.id), zoom);
 }

@@ -25,7 +25,10 @@ describe('customerAggregate', () => {
     // 11 customers in one bin, 10 in the next bin east, 1 two bins north; all near bin centres.
     const put = (x: number, y: number, n: number, weight: number) => {
       for (let i = 0; i < n; i++) {
-        const [lo, la] = conv.inversePoint(x + 500 + (i % 5) * 20 - 40, y + 500 + Math.floor(i / 5) * 20 - 20);
+        const [lo, la] = conv.inversePoint(
+          x + 500 + (i % 5) * 20 - 40,
+          y + 500 + Math.floor(i / 5) * 20 - 20,
+        );
         lon.push(lo);
         lat.push(la);
         w.push(weight);
@@ -34,7 +37,15 @@ describe('customerAggregate', () => {
     put(bx, by, 11, 2);
     put(bx + side, by, 10, 3);
     put(bx, by + 2 * side, 1, 5);
-    const fc = customerAggregate({ lon: Float64Array.from(lon), lat: Float64Array.from(lat), w: Float64Array.from(w), count: lon.length }, 12);
+    const fc = customerAggregate(
+      {
+        lon: Float64Array.from(lon),
+        lat: Float64Array.from(lat),
+        w: Float64Array.from(w),
+        count: lon.length,
+      },
+      12,
+    );
     expect(fc.binSizeM).toBe(1000);
     expect(fc.features).toHaveLength(1);
     expect(fc.features[0].properties).toEqual({ count: 11, weight: 22 });
@@ -47,6 +58,11 @@ describe('customerAggregate', () => {
     expect(y0).toBeCloseTo(by, 6);
   });
   it('refuses a file with no points', () => {
-    expect(() => customerAggregate({ lon: new Float64Array(0), lat: new Float64Array(0), w: new Float64Array(0), count: 0 }, 10)).toThrow('no imported points');
+    expect(() =>
+      customerAggregate(
+        { lon: new Float64Array(0), lat: new Float64Array(0), w: new Float64Array(0), count: 0 },
+        10,
+      ),
+    ).toThrow('no imported points');
   });
 });

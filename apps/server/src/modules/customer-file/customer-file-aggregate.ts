@@ -7,7 +7,9 @@ export const AGGREGATE_MIN_COUNT = 11;
 /** Smallest bin side in metres. */
 export const AGGREGATE_MIN_SIDE_M = 250;
 /** Bin sides offered, metres (the smallest one at least as large as the target is used). */
-export const AGGREGATE_SIDES_M = [250, 500, 1000, 2000, 5000, 10_000, 20_000, 50_000, 100_000, 200_000, 500_000] as const;
+export const AGGREGATE_SIDES_M = [
+  250, 500, 1000, 2000, 5000, 10_000, 20_000, 50_000, 100_000, 200_000, 500_000,
+] as const;
 /** Target bin size on screen, pixels. */
 const TARGET_PIXELS = 24;
 /** Web Mercator ground resolution at the equator for zoom 0 with 256-px tiles, metres per pixel (2π·6378137/256 [S]). */
@@ -16,7 +18,11 @@ const MERCATOR_M_PER_PX_Z0 = (2 * Math.PI * 6_378_137) / 256;
 /** Aggregated customers: square bins in a local metric projection, small bins suppressed. */
 export interface CustomerAggregate {
   type: 'FeatureCollection';
-  features: { type: 'Feature'; geometry: { type: 'Polygon'; coordinates: [number, number][][] }; properties: { count: number; weight: number } }[];
+  features: {
+    type: 'Feature';
+    geometry: { type: 'Polygon'; coordinates: [number, number][][] };
+    properties: { count: number; weight: number };
+  }[];
   binSizeM: number;
   projection: string;
   minCount: number;
@@ -33,8 +39,11 @@ export interface CustomerAggregate {
  * aggregateSide(12, 50); // 1000 (24 px ≈ 590 m at zoom 12, latitude 50°)
  */
 export function aggregateSide(zoom: number, latitude: number): number {
-  const target = (TARGET_PIXELS * MERCATOR_M_PER_PX_Z0 * Math.cos((latitude * Math.PI) / 180)) / 2 ** zoom;
-  return AGGREGATE_SIDES_M.find((s) => s >= target) ?? AGGREGATE_SIDES_M[AGGREGATE_SIDES_M.length - 1];
+  const target =
+    (TARGET_PIXELS * MERCATOR_M_PER_PX_Z0 * Math.cos((latitude * Math.PI) / 180)) / 2 ** zoom;
+  return (
+    AGGREGATE_SIDES_M.find((s) => s >= target) ?? AGGREGATE_SIDES_M[AGGREGATE_SIDES_M.length - 1]
+  );
 }
 
 /**
@@ -49,7 +58,12 @@ export function aggregateSide(zoom: number, latitude: number): number {
  * const fc = customerAggregate(await customerPointsLoad(em, id), 13);
  */
 export function customerAggregate(points: CustomerPoints, zoom: number): CustomerAggregate {
-  if (points.count === 0) throw new AppError(400, 'NO_POINTS', 'This customer file has no imported points to aggregate. Import it first.');
+  if (points.count === 0)
+    throw new AppError(
+      400,
+      'NO_POINTS',
+      'This customer file has no imported points to aggregate. Import it first.',
+    );
   const projection = projectionFor(points);
   const conv = projectionConverter(projection);
   const side = Math.max(AGGREGATE_MIN_SIDE_M, aggregateSide(zoom, projection.centerLat));
@@ -77,11 +91,27 @@ export function customerAggregate(points: CustomerPoints, zoom: number): Custome
     const x0 = bin.ix * side;
     const y0 = bin.iy * side;
     // Exterior ring counter-clockwise (RFC 7946 §3.1.6).
-    const ring = [conv.inversePoint(x0, y0), conv.inversePoint(x0 + side, y0), conv.inversePoint(x0 + side, y0 + side), conv.inversePoint(x0, y0 + side)];
+    const ring = [
+      conv.inversePoint(x0, y0),
+      conv.inversePoint(x0 + side, y0),
+      conv.inversePoint(x0 + side, y0 + side),
+      conv.inversePoint(x0, y0 + side),
+    ];
     ring.push(ring[0]);
-    features.push({ type: 'Feature', geometry: { type: 'Polygon', coordinates: [ring] }, properties: { count: bin.count, weight: bin.weight } });
+    features.push({
+      type: 'Feature',
+      geometry: { type: 'Polygon', coordinates: [ring] },
+      properties: { count: bin.count, weight: bin.weight },
+    });
   }
-  return { type: 'FeatureCollection', features, binSizeM: side, projection: projection.label, minCount: AGGREGATE_MIN_COUNT, suppressed };
+  return {
+    type: 'FeatureCollection',
+    features,
+    binSizeM: side,
+    projection: projection.label,
+    minCount: AGGREGATE_MIN_COUNT,
+    suppressed,
+  };
 }
 
 function projectionFor(points: CustomerPoints): LocalProjection {
@@ -91,7 +121,11 @@ function projectionFor(points: CustomerPoints): LocalProjection {
     try {
       return projectionForLonLat(points.lon, points.lat, { projection: 'laea' });
     } catch (err) {
-      throw new AppError(400, 'PROJECTION_SPAN', `The customers spread too wide to bin on one local map projection: ${(err as Error).message}.`);
+      throw new AppError(
+        400,
+        'PROJECTION_SPAN',
+        `The customers spread too wide to bin on one local map projection: ${(err as Error).message}.`,
+      );
     }
   }
 }

@@ -7,9 +7,17 @@ import { auditRecord } from '../audit/audit.service.js';
 import { entityId } from '../common/base.entity.js';
 import { ConflictError, ValidationError } from '../common/errors.js';
 import type { User } from '../user/user.entity.js';
-import { CustomerFileSchema, type ColumnMapping, type CustomerFile, type WeightKind } from './customer-file.entity.js';
+import {
+  CustomerFileSchema,
+  type ColumnMapping,
+  type CustomerFile,
+  type WeightKind,
+} from './customer-file.entity.js';
 import { customerFileView, type CustomerFileView } from './customer-file-view.js';
-import { CUSTOMER_POINT_CHUNK_SIZE, CustomerPointChunkSchema } from './customer-point-chunk.entity.js';
+import {
+  CUSTOMER_POINT_CHUNK_SIZE,
+  CustomerPointChunkSchema,
+} from './customer-point-chunk.entity.js';
 import { customerPointsPack } from './customer-points.js';
 import { customerFileLoad, type CustomerFileScope } from './customer-file.service.js';
 import { ImportAccumulator, type ImportResult } from './import-accumulator.js';
@@ -45,27 +53,65 @@ class ImportFailure extends Error {
  * @example
  * const view = await customerFileImportStart(em, scope, id, user, { mapping: { lon: 'lng', lat: 'lat' }, weightKind: 'count' });
  */
-export async function customerFileImportStart(em: EntityManager, scope: CustomerFileScope, fileId: string, actor: User, input: ImportInput): Promise<CustomerFileView> {
+export async function customerFileImportStart(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+  actor: User,
+  input: ImportInput,
+): Promise<CustomerFileView> {
   const f = await customerFileLoad(em, scope, fileId);
-  if (f.status === 'importing') throw new ConflictError('IMPORT_RUNNING', 'This file is already being imported. Poll GET …/customer-files/:fileId until its status is imported or failed.');
-  if (f.status === 'imported') throw new ConflictError('ALREADY_IMPORTED', 'This file is already imported and its raw upload was discarded. Upload the file again to import it with other columns.');
+  if (f.status === 'importing')
+    throw new ConflictError(
+      'IMPORT_RUNNING',
+      'This file is already being imported. Poll GET …/customer-files/:fileId until its status is imported or failed.',
+    );
+  if (f.status === 'imported')
+    throw new ConflictError(
+      'ALREADY_IMPORTED',
+      'This file is already imported and its raw upload was discarded. Upload the file again to import it with other columns.',
+    );
   const columns = f.detected.columns;
   const list = columns.map((c) => `"${c}"`).join(', ');
   for (const key of ['lon', 'lat', 'weight'] as const) {
     const name = input.mapping[key];
-    if (name !== undefined && !columns.includes(name)) throw new ValidationError(`mapping.${key}: the file has no column "${name}"; its columns are ${list}.`, `mapping.${key}`);
+    if (name !== undefined && !columns.includes(name))
+      throw new ValidationError(
+        `mapping.${key}: the file has no column "${name}"; its columns are ${list}.`,
+        `mapping.${key}`,
+      );
   }
-  if (input.mapping.lon === input.mapping.lat) throw new ValidationError('mapping.lat: longitude and latitude must be two different columns.', 'mapping.lat');
-  if (input.mapping.weight !== undefined && (input.mapping.weight === input.mapping.lon || input.mapping.weight === input.mapping.lat)) {
-    throw new ValidationError('mapping.weight: the weight must be a column other than longitude and latitude (leave it out to count every customer once).', 'mapping.weight');
+  if (input.mapping.lon === input.mapping.lat)
+    throw new ValidationError(
+      'mapping.lat: longitude and latitude must be two different columns.',
+      'mapping.lat',
+    );
+  if (
+    input.mapping.weight !== undefined &&
+    (input.mapping.weight === input.mapping.lon || input.mapping.weight === input.mapping.lat)
+  ) {
+    throw new ValidationError(
+      'mapping.weight: the weight must be a column other than longitude and latitude (leave it out to count every customer once).',
+      'mapping.weight',
+    );
   }
-  f.mapping = { lon: input.mapping.lon, lat: input.mapping.lat, ...(input.mapping.weight ? { weight: input.mapping.weight } : {}) };
+  f.mapping = {
+    lon: input.mapping.lon,
+    lat: input.mapping.lat,
+    ...(input.mapping.weight ? { weight: input.mapping.weight } : {}),
+  };
   f.weightKind = input.weightKind;
   f.weightLabel = input.weightLabel ?? (input.mapping.weight ? input.mapping.weight : 'customers');
   f.excludeFlagged = input.excludeFlagged ?? false;
   f.status = 'importing';
   f.error = null;
-  auditRecord(em, { action: 'customer_file.import', organizationId: scope.organizationId, actor, target: { type: 'customer_file', id: f.id }, details: { name: f.name, weightKind: f.weightKind, excludeFlagged: f.excludeFlagged } });
+  auditRecord(em, {
+    action: 'customer_file.import',
+    organizationId: scope.organizationId,
+    actor,
+    target: { type: 'customer_file', id: f.id },
+    details: { name: f.name, weightKind: f.weightKind, excludeFlagged: f.excludeFlagged },
+  });
   await em.flush();
   return customerFileView(f, true);
 }
@@ -83,34 +129,67 @@ export async function customerFileImportStart(em: EntityManager, scope: Customer
  * @example
  * void customerFileImport(orm, fileId, config.uploadsDir);
  */
-export async function customerFileImport(orm: MikroORM, fileId: string, uploadsDir: string): Promise<void> {
+export async function customerFileImport(
+  orm: MikroORM,
+  fileId: string,
+  uploadsDir: string,
+): Promise<void> {
   const em = orm.em.fork();
   const f = await em.findOne(CustomerFileSchema, { id: fileId, status: 'importing' });
   if (!f) return;
   try {
     const path = f.storedName ? join(uploadsDir, f.storedName) : null;
-    if (!path || !existsSync(path)) throw new ImportFailure('RAW_FILE_MISSING', 'The raw upload is missing on the server. Upload the file again.');
-    if (!f.mapping) throw new ImportFailure('NO_MAPPING', 'No column mapping was chosen. Import again with a mapping.');
-    const acc = new ImportAccumulator(f.detected.columns, f.mapping, f.detected.decimalComma, f.detected.hasHeader);
+    if (!path || !existsSync(path))
+      throw new ImportFailure(
+        'RAW_FILE_MISSING',
+        'The raw upload is missing on the server. Upload the file again.',
+      );
+    if (!f.mapping)
+      throw new ImportFailure(
+        'NO_MAPPING',
+        'No column mapping was chosen. Import again with a mapping.',
+      );
+    const acc = new ImportAccumulator(
+      f.detected.columns,
+      f.mapping,
+      f.detected.decimalComma,
+      f.detected.hasHeader,
+    );
     let skipHeader = f.detected.hasHeader;
-    await rowsRead(path, { format: f.format, delimiter: f.detected.delimiter, encoding: f.detected.encoding, simpleLines: f.detected.simpleLines }, (fields) => {
-      if (skipHeader) skipHeader = false;
-      else acc.add(fields);
-    });
+    await rowsRead(
+      path,
+      {
+        format: f.format,
+        delimiter: f.detected.delimiter,
+        encoding: f.detected.encoding,
+        simpleLines: f.detected.simpleLines,
+      },
+      (fields) => {
+        if (skipHeader) skipHeader = false;
+        else acc.add(fields);
+      },
+    );
     const result = acc.finish(f.excludeFlagged);
     if (result.acceptedCount === 0) {
       resultApply(f, result);
       f.status = 'failed';
       f.error = {
         code: 'NO_VALID_ROWS',
-        message: result.rowCount === 0 ? 'The file has no data rows below the header.' : `None of the ${result.rowCount} rows has valid coordinates${f.excludeFlagged ? ' (or all were flagged and excluded)' : ''}. Check the report and the column mapping, then import again.`,
+        message:
+          result.rowCount === 0
+            ? 'The file has no data rows below the header.'
+            : `None of the ${result.rowCount} rows has valid coordinates${f.excludeFlagged ? ' (or all were flagged and excluded)' : ''}. Check the report and the column mapping, then import again.`,
       };
       await em.flush();
       return;
     }
     await em.transactional(async (tx) => {
       await tx.nativeDelete(CustomerPointChunkSchema, { customerFile: f.id });
-      for (let seq = 0, start = 0; start < result.count; seq++, start += CUSTOMER_POINT_CHUNK_SIZE) {
+      for (
+        let seq = 0, start = 0;
+        start < result.count;
+        seq++, start += CUSTOMER_POINT_CHUNK_SIZE
+      ) {
         const count = Math.min(CUSTOMER_POINT_CHUNK_SIZE, result.count - start);
         tx.create(CustomerPointChunkSchema, {
           id: entityId(),
@@ -135,7 +214,13 @@ export async function customerFileImport(orm: MikroORM, fileId: string, uploadsD
     const current = await fresh.findOne(CustomerFileSchema, fileId);
     if (!current) return;
     current.status = 'failed';
-    current.error = err instanceof ImportFailure ? { code: err.code, message: err.message } : { code: 'IMPORT_FAILED', message: `The file could not be read: ${(err as Error).message}. Check that it is a valid CSV or XLSX file and import again.` };
+    current.error =
+      err instanceof ImportFailure
+        ? { code: err.code, message: err.message }
+        : {
+            code: 'IMPORT_FAILED',
+            message: `The file could not be read: ${(err as Error).message}. Check that it is a valid CSV or XLSX file and import again.`,
+          };
     await fresh.flush().catch(() => {});
   }
 }
@@ -153,40 +238,6 @@ function resultApply(f: CustomerFile, r: ImportResult): void {
 }
 
 /**
- * Runs imports in the background of this process and lets `close` wait for them.
- */
-export class ImportRunner {
-  private readonly running = new Set<Promise<void>>();
-
-  /**
-   * @param orm - the ORM
-   * @param uploadsDir - UPLOADS_DIR
-   */
-  constructor(
-    private readonly orm: MikroORM,
-    private readonly uploadsDir: string,
-  ) {}
-
-  /**
-   * Starts one import after the current request has been answered.
-   * @param fileId - a file marked importing
-   * @returns the import's promise
-   */
-  start(fileId: string): Promise<void> {
-    const job = new Promise<void>((resolve) => setImmediate(resolve))
-      .then(() => customerFileImport(this.orm, fileId, this.uploadsDir))
-      .finally(() => this.running.delete(job));
-    this.running.add(job);
-    return job;
-  }
-
-  /** @returns resolves when no import is running */
-  async idle(): Promise<void> {
-    while (this.running.size > 0) await Promise.allSettled([...this.running]);
-  }
-}
-
-/**
  * On start-up: files left `importing` by a stopped server become `failed` ("import interrupted");
  * their raw upload is kept so the import can simply be run again.
  * @param orm - the ORM
@@ -199,6 +250,12 @@ export async function customerFilesInterrupted(orm: MikroORM): Promise<number> {
   return em.nativeUpdate(
     CustomerFileSchema,
     { status: 'importing' },
-    { status: 'failed', error: { code: 'IMPORT_INTERRUPTED', message: 'Import interrupted (the server stopped) — run the import again.' } },
+    {
+      status: 'failed',
+      error: {
+        code: 'IMPORT_INTERRUPTED',
+        message: 'Import interrupted (the server stopped) — run the import again.',
+      },
+    },
   );
 }

@@ -14,7 +14,15 @@ export const PREVIEW_ROWS = 20;
 export interface CustomerFilePreview {
   columns: string[];
   rows: string[][];
-  detected: { lon?: string; lat?: string; weight?: string; delimiter: string | null; decimalComma: boolean; encoding: string; hasHeader: boolean };
+  detected: {
+    lon?: string;
+    lat?: string;
+    weight?: string;
+    delimiter: string | null;
+    decimalComma: boolean;
+    encoding: string;
+    hasHeader: boolean;
+  };
 }
 
 /**
@@ -50,7 +58,10 @@ export function columnsFromFirstRow(first: string[]): { columns: string[]; hasHe
  * @example
  * const { detected, preview } = await customerFileInspect(path, 'csv');
  */
-export async function customerFileInspect(path: string, format: 'csv' | 'xlsx'): Promise<{ detected: CustomerFileDetected; preview: CustomerFilePreview }> {
+export async function customerFileInspect(
+  path: string,
+  format: 'csv' | 'xlsx',
+): Promise<{ detected: CustomerFileDetected; preview: CustomerFilePreview }> {
   let encoding: CustomerFileDetected['encoding'] = 'utf-8';
   let delimiter: string | null = null;
   let decimalComma = false;
@@ -68,18 +79,48 @@ export async function customerFileInspect(path: string, format: 'csv' | 'xlsx'):
     });
   } catch (err) {
     if (format === 'xlsx') {
-      throw new AppError(415, 'UNSUPPORTED_FILE_TYPE', `The file looks like a zip archive but is not a readable .xlsx workbook (${(err as Error).message}). Save it again as .xlsx or CSV.`, 'file');
+      throw new AppError(
+        415,
+        'UNSUPPORTED_FILE_TYPE',
+        `The file looks like a zip archive but is not a readable .xlsx workbook (${(err as Error).message}). Save it again as .xlsx or CSV.`,
+        'file',
+      );
     }
     throw err;
   }
-  if (rows.length === 0) throw new AppError(400, 'NO_COLUMNS', 'No rows found in the file (the first worksheet is read for XLSX). Put a header line and one customer per row.', 'file');
+  if (rows.length === 0)
+    throw new AppError(
+      400,
+      'NO_COLUMNS',
+      'No rows found in the file (the first worksheet is read for XLSX). Put a header line and one customer per row.',
+      'file',
+    );
   const { columns, hasHeader } = columnsFromFirstRow(rows[0]);
   if (columns.length < 2) {
-    throw new AppError(400, 'NO_COLUMNS', 'Only one column was found. Separate columns with a comma, semicolon, tab or |, and put longitude and latitude in columns of their own.', 'file');
+    throw new AppError(
+      400,
+      'NO_COLUMNS',
+      'Only one column was found. Separate columns with a comma, semicolon, tab or |, and put longitude and latitude in columns of their own.',
+      'file',
+    );
   }
   const suggested = columnGuess(columns);
-  const detected: CustomerFileDetected = { columns, hasHeader, delimiter, decimalComma, encoding, simpleLines, suggested };
-  return { detected, preview: previewOf(detected, hasHeader ? rows.slice(1, PREVIEW_ROWS + 1) : rows.slice(0, PREVIEW_ROWS)) };
+  const detected: CustomerFileDetected = {
+    columns,
+    hasHeader,
+    delimiter,
+    decimalComma,
+    encoding,
+    simpleLines,
+    suggested,
+  };
+  return {
+    detected,
+    preview: previewOf(
+      detected,
+      hasHeader ? rows.slice(1, PREVIEW_ROWS + 1) : rows.slice(0, PREVIEW_ROWS),
+    ),
+  };
 }
 
 /**
@@ -94,7 +135,13 @@ export function previewOf(detected: CustomerFileDetected, rows: string[][]): Cus
   return {
     columns: detected.columns,
     rows,
-    detected: { ...detected.suggested, delimiter: detected.delimiter, decimalComma: detected.decimalComma, encoding: detected.encoding, hasHeader: detected.hasHeader },
+    detected: {
+      ...detected.suggested,
+      delimiter: detected.delimiter,
+      decimalComma: detected.decimalComma,
+      encoding: detected.encoding,
+      hasHeader: detected.hasHeader,
+    },
   };
 }
 
@@ -107,17 +154,33 @@ export function previewOf(detected: CustomerFileDetected, rows: string[][]): Cus
  * @example
  * const rows = await previewRows(path, file.format, file.detected);
  */
-export async function previewRows(path: string, format: 'csv' | 'xlsx', detected: CustomerFileDetected): Promise<string[][]> {
+export async function previewRows(
+  path: string,
+  format: 'csv' | 'xlsx',
+  detected: CustomerFileDetected,
+): Promise<string[][]> {
   const rows: string[][] = [];
   const wanted = PREVIEW_ROWS + (detected.hasHeader ? 1 : 0);
-  await rowsRead(path, { format, delimiter: detected.delimiter, encoding: detected.encoding, simpleLines: detected.simpleLines }, (fields) => {
-    rows.push(fields);
-    return rows.length < wanted;
-  });
+  await rowsRead(
+    path,
+    {
+      format,
+      delimiter: detected.delimiter,
+      encoding: detected.encoding,
+      simpleLines: detected.simpleLines,
+    },
+    (fields) => {
+      rows.push(fields);
+      return rows.length < wanted;
+    },
+  );
   return detected.hasHeader ? rows.slice(1) : rows;
 }
 
-async function firstLines(path: string, encoding: CustomerFileDetected['encoding']): Promise<string[]> {
+async function firstLines(
+  path: string,
+  encoding: CustomerFileDetected['encoding'],
+): Promise<string[]> {
   const handle = await open(path, 'r');
   try {
     const buf = Buffer.alloc(64 * 1024);

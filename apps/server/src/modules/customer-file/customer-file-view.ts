@@ -1,7 +1,8 @@
 import type { CustomerFile, CustomerFileReport } from './customer-file.entity.js';
 
 /** Said wherever customer files are shown (API and UI). */
-export const PRIVACY_NOTE = 'Only coordinates and the weight are kept; other columns (names, addresses, e-mails) are discarded at import.';
+export const PRIVACY_NOTE =
+  'Only coordinates and the weight are kept; other columns (names, addresses, e-mails) are discarded at import.';
 
 /** A customer file as the API returns it. */
 export interface CustomerFileView {
@@ -68,7 +69,10 @@ export function customerFileView(f: CustomerFile, withExamples: boolean): Custom
     totalWeight: f.totalWeight,
     rawFileKept: f.storedName !== null,
     privacyNote: PRIVACY_NOTE,
-    createdBy: f.createdBy && f.createdBy.name !== undefined ? { id: f.createdBy.id, name: f.createdBy.name } : null,
+    createdBy:
+      f.createdBy && f.createdBy.name !== undefined
+        ? { id: f.createdBy.id, name: f.createdBy.name }
+        : null,
     createdAt: f.createdAt.toISOString(),
     updatedAt: f.updatedAt.toISOString(),
     importedAt: f.importedAt ? f.importedAt.toISOString() : null,

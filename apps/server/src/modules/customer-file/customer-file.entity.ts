@@ -4,7 +4,12 @@ import type { Organization } from '../organization/organization.entity.js';
 import type { User } from '../user/user.entity.js';
 import type { Workspace } from '../workspace/workspace.entity.js';
 
-export const CUSTOMER_FILE_STATUSES = ['awaiting-mapping', 'importing', 'imported', 'failed'] as const;
+export const CUSTOMER_FILE_STATUSES = [
+  'awaiting-mapping',
+  'importing',
+  'imported',
+  'failed',
+] as const;
 export type CustomerFileStatus = (typeof CUSTOMER_FILE_STATUSES)[number];
 export const WEIGHT_KINDS = ['count', 'spend', 'visits', 'other'] as const;
 export type WeightKind = (typeof WEIGHT_KINDS)[number];
@@ -38,7 +43,14 @@ export interface CustomerFileReport {
   flagged: Record<string, number>;
   examples: Record<string, { row: number; lon: string; lat: string; weight?: string }[]>;
   /** The outlier rule as applied (centre, spread and distance limit in metres). */
-  outlierRule?: { centerLon: number; centerLat: number; spreadM: number; limitM: number; applied: boolean; note: string };
+  outlierRule?: {
+    centerLon: number;
+    centerLat: number;
+    spreadM: number;
+    limitM: number;
+    applied: boolean;
+    note: string;
+  };
 }
 
 /** An uploaded customer file and, after import, its validation report. */

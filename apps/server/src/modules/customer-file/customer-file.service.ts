@@ -9,7 +9,12 @@ import { ConflictError, NotFoundError } from '../common/errors.js';
 import type { User } from '../user/user.entity.js';
 import { WorkspaceSchema } from '../workspace/workspace.entity.js';
 import { CustomerFileSchema, type CustomerFile } from './customer-file.entity.js';
-import { customerFileInspect, previewOf, previewRows, type CustomerFilePreview } from './customer-file-inspect.js';
+import {
+  customerFileInspect,
+  previewOf,
+  previewRows,
+  type CustomerFilePreview,
+} from './customer-file-inspect.js';
 import { customerFileView, type CustomerFileView } from './customer-file-view.js';
 import { fileSniff } from './file-sniff.js';
 
@@ -29,7 +34,10 @@ export interface CustomerFileScope {
  * await workspaceInScope(em, { organizationId, workspaceId });
  */
 export async function workspaceInScope(em: EntityManager, scope: CustomerFileScope): Promise<void> {
-  const count = await em.count(WorkspaceSchema, { id: scope.workspaceId, organization: scope.organizationId });
+  const count = await em.count(WorkspaceSchema, {
+    id: scope.workspaceId,
+    organization: scope.organizationId,
+  });
   if (count === 0) throw new NotFoundError('Workspace');
 }
 
@@ -43,8 +51,16 @@ export async function workspaceInScope(em: EntityManager, scope: CustomerFileSco
  * @example
  * const file = await customerFileLoad(em, scope, id);
  */
-export async function customerFileLoad(em: EntityManager, scope: CustomerFileScope, fileId: string): Promise<CustomerFile> {
-  const f = await em.findOne(CustomerFileSchema, { id: fileId, organization: scope.organizationId, workspace: scope.workspaceId }, { populate: ['createdBy'] });
+export async function customerFileLoad(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+): Promise<CustomerFile> {
+  const f = await em.findOne(
+    CustomerFileSchema,
+    { id: fileId, organization: scope.organizationId, workspace: scope.workspaceId },
+    { populate: ['createdBy'] },
+  );
   if (!f) throw new NotFoundError('Customer file');
   return f;
 }
@@ -58,9 +74,17 @@ export async function customerFileLoad(em: EntityManager, scope: CustomerFileSco
  * @example
  * const files = await customerFileList(em, scope, true);
  */
-export async function customerFileList(em: EntityManager, scope: CustomerFileScope, withExamples: boolean): Promise<CustomerFileView[]> {
+export async function customerFileList(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  withExamples: boolean,
+): Promise<CustomerFileView[]> {
   await workspaceInScope(em, scope);
-  const rows = await em.find(CustomerFileSchema, { organization: scope.organizationId, workspace: scope.workspaceId }, { populate: ['createdBy'], orderBy: { createdAt: 'desc', id: 'asc' } });
+  const rows = await em.find(
+    CustomerFileSchema,
+    { organization: scope.organizationId, workspace: scope.workspaceId },
+    { populate: ['createdBy'], orderBy: { createdAt: 'desc', id: 'asc' } },
+  );
   return rows.map((f) => customerFileView(f, withExamples));
 }
 
@@ -106,7 +130,13 @@ export async function customerFileCreate(
       createdBy: em.getReference('User', actor.id),
       importedAt: null,
     } as unknown as CustomerFile);
-    auditRecord(em, { action: 'customer_file.upload', organizationId: scope.organizationId, actor, target: { type: 'customer_file', id: f.id }, details: { name: f.name, sizeBytes: f.sizeBytes, format } });
+    auditRecord(em, {
+      action: 'customer_file.upload',
+      organizationId: scope.organizationId,
+      actor,
+      target: { type: 'customer_file', id: f.id },
+      details: { name: f.name, sizeBytes: f.sizeBytes, format },
+    });
     await em.flush();
     f.createdBy = actor;
     return { customerFile: customerFileView(f, true), preview };
@@ -134,11 +164,19 @@ function originalName(name: string): string {
  * @example
  * const preview = await customerFilePreview(em, scope, id, config.uploadsDir);
  */
-export async function customerFilePreview(em: EntityManager, scope: CustomerFileScope, fileId: string, uploadsDir: string): Promise<CustomerFilePreview> {
+export async function customerFilePreview(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+  uploadsDir: string,
+): Promise<CustomerFilePreview> {
   const f = await customerFileLoad(em, scope, fileId);
   const path = f.storedName ? join(uploadsDir, f.storedName) : null;
   if (!path || !existsSync(path)) {
-    throw new ConflictError('RAW_FILE_DISCARDED', 'The raw upload is no longer kept (after import only coordinates and the weight are stored). Upload the file again to map its columns differently.');
+    throw new ConflictError(
+      'RAW_FILE_DISCARDED',
+      'The raw upload is no longer kept (after import only coordinates and the weight are stored). Upload the file again to map its columns differently.',
+    );
   }
   return previewOf(f.detected, await previewRows(path, f.format, f.detected));
 }
@@ -156,15 +194,34 @@ export async function customerFilePreview(em: EntityManager, scope: CustomerFile
  * @example
  * await customerFileDelete(em, scope, id, user, config.uploadsDir);
  */
-export async function customerFileDelete(em: EntityManager, scope: CustomerFileScope, fileId: string, actor: User, uploadsDir: string): Promise<void> {
+export async function customerFileDelete(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+  actor: User,
+  uploadsDir: string,
+): Promise<void> {
   const f = await customerFileLoad(em, scope, fileId);
-  if (f.status === 'importing') throw new ConflictError('IMPORTING', 'This file is being imported. Wait until the import has finished, then delete it.');
+  if (f.status === 'importing')
+    throw new ConflictError(
+      'IMPORTING',
+      'This file is being imported. Wait until the import has finished, then delete it.',
+    );
   const busy = await surfacesRunningCount(em, f.id);
   if (busy > 0) {
-    throw new ConflictError('IN_USE', `${busy} demand surface${busy === 1 ? ' is' : 's are'} queued or running on this file. Cancel ${busy === 1 ? 'it' : 'them'} or wait until ${busy === 1 ? 'it finishes' : 'they finish'}, then delete the file.`);
+    throw new ConflictError(
+      'IN_USE',
+      `${busy} demand surface${busy === 1 ? ' is' : 's are'} queued or running on this file. Cancel ${busy === 1 ? 'it' : 'them'} or wait until ${busy === 1 ? 'it finishes' : 'they finish'}, then delete the file.`,
+    );
   }
   const stored = f.storedName;
-  auditRecord(em, { action: 'customer_file.delete', organizationId: scope.organizationId, actor, target: { type: 'customer_file', id: f.id }, details: { name: f.name } });
+  auditRecord(em, {
+    action: 'customer_file.delete',
+    organizationId: scope.organizationId,
+    actor,
+    target: { type: 'customer_file', id: f.id },
+    details: { name: f.name },
+  });
   em.remove(f);
   await em.flush();
   if (stored) await rm(join(uploadsDir, stored), { force: true });
@@ -173,9 +230,14 @@ export async function customerFileDelete(em: EntityManager, scope: CustomerFileS
 async function surfacesRunningCount(em: EntityManager, fileId: string): Promise<number> {
   // The surfaces table belongs to the surface module and may not exist yet in this database.
   const conn = em.getConnection();
-  const table = await conn.execute<{ n: number }[]>("select count(*) as n from sqlite_master where type = 'table' and name = 'surfaces'");
+  const table = await conn.execute<{ n: number }[]>(
+    "select count(*) as n from sqlite_master where type = 'table' and name = 'surfaces'",
+  );
   if (!table[0] || Number(table[0].n) === 0) return 0;
-  const rows = await conn.execute<{ n: number }[]>("select count(*) as n from surfaces where customer_file_id = ? and status in ('queued', 'running')", [fileId]);
+  const rows = await conn.execute<{ n: number }[]>(
+    "select count(*) as n from surfaces where customer_file_id = ? and status in ('queued', 'running')",
+    [fileId],
+  );
   return Number(rows[0]?.n ?? 0);
 }
 
@@ -191,11 +253,26 @@ async function surfacesRunningCount(em: EntityManager, fileId: string): Promise<
  * @example
  * const { name, csv } = await customerFileRejectedCsv(em, scope, id, user);
  */
-export async function customerFileRejectedCsv(em: EntityManager, scope: CustomerFileScope, fileId: string, actor: User): Promise<{ name: string; csv: string }> {
+export async function customerFileRejectedCsv(
+  em: EntityManager,
+  scope: CustomerFileScope,
+  fileId: string,
+  actor: User,
+): Promise<{ name: string; csv: string }> {
   const f = await customerFileLoad(em, scope, fileId);
   await em.populate(f, ['rejectedCsv']);
-  if (!f.rejectedCsv) throw new ConflictError('NOT_IMPORTED', 'The rows have not been validated yet. Import the file (choose the columns), then download the rejected rows.');
-  auditRecord(em, { action: 'customer_file.rejected_download', organizationId: scope.organizationId, actor, target: { type: 'customer_file', id: f.id }, details: { rejectedCount: f.rejectedCount } });
+  if (!f.rejectedCsv)
+    throw new ConflictError(
+      'NOT_IMPORTED',
+      'The rows have not been validated yet. Import the file (choose the columns), then download the rejected rows.',
+    );
+  auditRecord(em, {
+    action: 'customer_file.rejected_download',
+    organizationId: scope.organizationId,
+    actor,
+    target: { type: 'customer_file', id: f.id },
+    details: { rejectedCount: f.rejectedCount },
+  });
   await em.flush();
   const base = f.name.replace(/\.[^.]*$/, '').replace(/[^\w.-]+/g, '-') || 'customer-file';
   return { name: `${base}-rejected-rows.csv`, csv: gunzipSync(f.rejectedCsv).toString('utf8') };

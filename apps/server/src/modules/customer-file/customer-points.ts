@@ -21,7 +21,11 @@ const LITTLE_ENDIAN = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
  * @example
  * const blob = customerPointsPack({ lon, lat, w, count: lon.length });
  */
-export function customerPointsPack(points: CustomerPoints, start = 0, count = points.count - start): Buffer {
+export function customerPointsPack(
+  points: CustomerPoints,
+  start = 0,
+  count = points.count - start,
+): Buffer {
   const out = Buffer.allocUnsafe(count * 24);
   if (LITTLE_ENDIAN) {
     const view = new Float64Array(out.buffer, out.byteOffset, count * 3);
@@ -47,7 +51,8 @@ export function customerPointsPack(points: CustomerPoints, start = 0, count = po
  * const { lon, lat, w } = customerPointsUnpack(chunk.data);
  */
 export function customerPointsUnpack(blob: Uint8Array): CustomerPoints {
-  if (blob.byteLength % 24 !== 0) throw new Error(`customer point chunk must be a multiple of 24 bytes (got ${blob.byteLength})`);
+  if (blob.byteLength % 24 !== 0)
+    throw new Error(`customer point chunk must be a multiple of 24 bytes (got ${blob.byteLength})`);
   const count = blob.byteLength / 24;
   const lon = new Float64Array(count);
   const lat = new Float64Array(count);
@@ -70,8 +75,15 @@ export function customerPointsUnpack(blob: Uint8Array): CustomerPoints {
  * @example
  * const { lon, lat, w, count } = await customerPointsLoad(em.fork(), file.id);
  */
-export async function customerPointsLoad(em: EntityManager, customerFileId: string): Promise<CustomerPoints> {
-  const chunks = await em.find(CustomerPointChunkSchema, { customerFile: customerFileId }, { orderBy: { seq: 'asc' } });
+export async function customerPointsLoad(
+  em: EntityManager,
+  customerFileId: string,
+): Promise<CustomerPoints> {
+  const chunks = await em.find(
+    CustomerPointChunkSchema,
+    { customerFile: customerFileId },
+    { orderBy: { seq: 'asc' } },
+  );
   const count = chunks.reduce((sum, c) => sum + c.count, 0);
   const lon = new Float64Array(count);
   const lat = new Float64Array(count);
@@ -79,7 +91,10 @@ export async function customerPointsLoad(em: EntityManager, customerFileId: stri
   let at = 0;
   for (const chunk of chunks) {
     const part = customerPointsUnpack(chunk.data);
-    if (part.count !== chunk.count) throw new Error(`customer point chunk ${chunk.seq} of file ${customerFileId} holds ${part.count} points, expected ${chunk.count}`);
+    if (part.count !== chunk.count)
+      throw new Error(
+        `customer point chunk ${chunk.seq} of file ${customerFileId} holds ${part.count} points, expected ${chunk.count}`,
+      );
     lon.set(part.lon, at);
     lat.set(part.lat, at);
     w.set(part.w, at);

@@ -8,7 +8,8 @@ export interface FileSniff {
   format: 'csv' | 'xlsx';
 }
 
-const UNSUPPORTED = 'Upload a CSV (comma, semicolon, tab or | separated text) or an Excel .xlsx workbook.';
+const UNSUPPORTED =
+  'Upload a CSV (comma, semicolon, tab or | separated text) or an Excel .xlsx workbook.';
 
 /**
  * Decides by content (not by name) whether an upload is an XLSX workbook (zip magic `PK\x03\x04`)
@@ -29,17 +30,46 @@ export async function fileSniff(path: string): Promise<FileSniff> {
     await handle.close();
   }
   const bytes = head.subarray(0, length);
-  if (length === 0 || bytes.toString('latin1').trim() === '') throw new AppError(400, 'EMPTY_FILE', 'The file is empty. Upload a CSV or XLSX file with a header line and one customer per row.', 'file');
-  if (bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04) return { format: 'xlsx' };
+  if (length === 0 || bytes.toString('latin1').trim() === '')
+    throw new AppError(
+      400,
+      'EMPTY_FILE',
+      'The file is empty. Upload a CSV or XLSX file with a header line and one customer per row.',
+      'file',
+    );
+  if (bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04)
+    return { format: 'xlsx' };
   if (bytes[0] === 0xd0 && bytes[1] === 0xcf && bytes[2] === 0x11 && bytes[3] === 0xe0) {
-    throw new AppError(415, 'UNSUPPORTED_FILE_TYPE', `This is an old Excel 97–2003 (.xls) or other Office binary file. Save it as .xlsx or CSV and upload again.`, 'file');
+    throw new AppError(
+      415,
+      'UNSUPPORTED_FILE_TYPE',
+      `This is an old Excel 97–2003 (.xls) or other Office binary file. Save it as .xlsx or CSV and upload again.`,
+      'file',
+    );
   }
   if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
-    throw new AppError(415, 'UNSUPPORTED_FILE_TYPE', 'This text file is UTF-16 encoded. Save it as "CSV UTF-8" (or Latin-1) and upload again.', 'file');
+    throw new AppError(
+      415,
+      'UNSUPPORTED_FILE_TYPE',
+      'This text file is UTF-16 encoded. Save it as "CSV UTF-8" (or Latin-1) and upload again.',
+      'file',
+    );
   }
   const other = binaryKind(bytes);
-  if (other) throw new AppError(415, 'UNSUPPORTED_FILE_TYPE', `This is ${other}, not a customer table. ${UNSUPPORTED}`, 'file');
-  if (bytes.includes(0)) throw new AppError(415, 'UNSUPPORTED_FILE_TYPE', `The file is not text and not an XLSX workbook (it contains binary data). ${UNSUPPORTED}`, 'file');
+  if (other)
+    throw new AppError(
+      415,
+      'UNSUPPORTED_FILE_TYPE',
+      `This is ${other}, not a customer table. ${UNSUPPORTED}`,
+      'file',
+    );
+  if (bytes.includes(0))
+    throw new AppError(
+      415,
+      'UNSUPPORTED_FILE_TYPE',
+      `The file is not text and not an XLSX workbook (it contains binary data). ${UNSUPPORTED}`,
+      'file',
+    );
   return { format: 'csv' };
 }
 
@@ -56,7 +86,8 @@ const MAGIC: [string, number[]][] = [
 function binaryKind(bytes: Buffer): string | null {
   for (const [name, magic] of MAGIC) if (magic.every((b, i) => bytes[i] === b)) return name;
   const start = bytes.subarray(0, 64).toString('latin1').trimStart().toLowerCase();
-  if (start.startsWith('<?xml') || start.startsWith('<!doctype') || start.startsWith('<html')) return 'an XML or HTML document';
+  if (start.startsWith('<?xml') || start.startsWith('<!doctype') || start.startsWith('<html'))
+    return 'an XML or HTML document';
   return null;
 }
 
@@ -88,7 +119,9 @@ export async function textScan(path: string): Promise<TextScan> {
   let lf = false;
   let cr = false;
   let carry: Buffer = Buffer.alloc(0);
-  for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 }) as AsyncIterable<Buffer>) {
+  for await (const chunk of createReadStream(path, {
+    highWaterMark: 1 << 20,
+  }) as AsyncIterable<Buffer>) {
     if (!quote && chunk.includes(0x22)) quote = true;
     if (!lf && chunk.includes(0x0a)) lf = true;
     if (!cr && chunk.includes(0x0d)) cr = true;
@@ -104,7 +137,10 @@ export async function textScan(path: string): Promise<TextScan> {
     if (!isUtf8(data)) utf8 = false;
   }
   if (utf8 && carry.length > 0 && !isUtf8(carry)) utf8 = false;
-  return { encoding: !utf8 ? 'latin1' : bom ? 'utf-8-bom' : 'utf-8', simpleLines: !quote && (lf || !cr) };
+  return {
+    encoding: !utf8 ? 'latin1' : bom ? 'utf-8-bom' : 'utf-8',
+    simpleLines: !quote && (lf || !cr),
+  };
 }
 
 /** Index where an incomplete trailing UTF-8 sequence starts (or the length when none). */

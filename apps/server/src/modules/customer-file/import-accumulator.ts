@@ -65,7 +65,13 @@ export class ImportAccumulator {
     this.latIndex = columns.indexOf(mapping.lat);
     this.weightIndex = mapping.weight ? columns.indexOf(mapping.weight) : -1;
     this.rowNumber = hasHeader ? 1 : 0;
-    const header = ['row', 'reason', mapping.lon, mapping.lat, ...(mapping.weight ? [mapping.weight] : [])];
+    const header = [
+      'row',
+      'reason',
+      mapping.lon,
+      mapping.lat,
+      ...(mapping.weight ? [mapping.weight] : []),
+    ];
     this.rejectedLines = [header.map(csvCell).join(',')];
   }
 
@@ -79,11 +85,23 @@ export class ImportAccumulator {
     const lonText = fields[this.lonIndex];
     const latText = fields[this.latIndex];
     const weightText = this.weightIndex >= 0 ? fields[this.weightIndex] : undefined;
-    const outcome = rowValidate(lonText, latText, weightText, this.decimalComma, this.weightIndex >= 0);
+    const outcome = rowValidate(
+      lonText,
+      latText,
+      weightText,
+      this.decimalComma,
+      this.weightIndex >= 0,
+    );
     if (!outcome.ok) {
       this.rejected[outcome.reason] = (this.rejected[outcome.reason] ?? 0) + 1;
       this.example(outcome.reason, row, lonText, latText, weightText);
-      const cells = [String(row), outcome.reason, lonText ?? '', latText ?? '', ...(this.weightIndex >= 0 ? [weightText ?? ''] : [])];
+      const cells = [
+        String(row),
+        outcome.reason,
+        lonText ?? '',
+        latText ?? '',
+        ...(this.weightIndex >= 0 ? [weightText ?? ''] : []),
+      ];
       this.rejectedLines.push(cells.map(csvCell).join(','));
       return;
     }
@@ -116,10 +134,17 @@ export class ImportAccumulator {
         this.flags[i] |= POINT_FLAG_OUTLIER;
         flagged.outlier = (flagged.outlier ?? 0) + 1;
         if ((this.examples.outlier?.length ?? 0) < REPORT_EXAMPLES_PER_REASON) {
-          this.example('outlier', this.rows[i], String(this.lon[i]), String(this.lat[i]), this.weightIndex >= 0 ? String(this.w[i]) : undefined);
+          this.example(
+            'outlier',
+            this.rows[i],
+            String(this.lon[i]),
+            String(this.lat[i]),
+            this.weightIndex >= 0 ? String(this.w[i]) : undefined,
+          );
         }
       }
-      if (this.flags[i] & POINT_FLAG_DUPLICATE) flagged['duplicate-row'] = (flagged['duplicate-row'] ?? 0) + 1;
+      if (this.flags[i] & POINT_FLAG_DUPLICATE)
+        flagged['duplicate-row'] = (flagged['duplicate-row'] ?? 0) + 1;
       if (this.flags[i] !== 0) flaggedCount++;
     }
     let kept = 0;
@@ -177,10 +202,21 @@ export class ImportAccumulator {
     };
   }
 
-  private example(reason: RejectReason | FlagReason, row: number, lon: string | undefined, lat: string | undefined, weight: string | undefined): void {
+  private example(
+    reason: RejectReason | FlagReason,
+    row: number,
+    lon: string | undefined,
+    lat: string | undefined,
+    weight: string | undefined,
+  ): void {
     const list = (this.examples[reason] ??= []);
     if (list.length >= REPORT_EXAMPLES_PER_REASON) return;
-    list.push({ row, lon: lon ?? '', lat: lat ?? '', ...(this.mapping.weight ? { weight: weight ?? '' } : {}) });
+    list.push({
+      row,
+      lon: lon ?? '',
+      lat: lat ?? '',
+      ...(this.mapping.weight ? { weight: weight ?? '' } : {}),
+    });
   }
 
   private grow(): void {

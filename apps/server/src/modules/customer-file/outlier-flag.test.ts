@@ -10,7 +10,10 @@ describe('haversineM', () => {
   it('matches the spherical law of cosines for a longer arc', () => {
     // cos c = sin φ1 sin φ2 + cos φ1 cos φ2 cos Δλ [S: spherical trigonometry]
     const r = Math.PI / 180;
-    const c = Math.acos(Math.sin(44.5 * r) * Math.sin(46 * r) + Math.cos(44.5 * r) * Math.cos(46 * r) * Math.cos(8.5 * r));
+    const c = Math.acos(
+      Math.sin(44.5 * r) * Math.sin(46 * r) +
+        Math.cos(44.5 * r) * Math.cos(46 * r) * Math.cos(8.5 * r),
+    );
     expect(haversineM(-38.5, 44.5, -30, 46)).toBeCloseTo(c * 6_371_008.8, 3);
   });
 });
@@ -39,7 +42,12 @@ describe('outlierFlag', () => {
     lat.push(44.5 + 4.9 * degLat, 44.5 + 5.1 * degLat);
     lon.push(-38.5, -38.5);
     const n = lon.length;
-    const r = outlierFlag(Float64Array.from(lon), Float64Array.from(lat), new Float64Array(n).fill(1), n);
+    const r = outlierFlag(
+      Float64Array.from(lon),
+      Float64Array.from(lat),
+      new Float64Array(n).fill(1),
+      n,
+    );
     expect(r.applied).toBe(true);
     expect(r.spreadM).toBeCloseTo(1000, -1);
     expect(r.limitM).toBeCloseTo(5000, -1);
@@ -53,14 +61,19 @@ describe('outlierFlag', () => {
     lat[0] = 44.5 + 0.005; // ≈ 556 m
     expect(outlierFlag(lon, lat, new Float64Array(n).fill(1), n).count).toBe(0);
     lat[0] = 50;
-    expect(outlierFlag(lon, lat, new Float64Array(n).fill(1), 19)).toMatchObject({ applied: false, count: 0 });
+    expect(outlierFlag(lon, lat, new Float64Array(n).fill(1), 19)).toMatchObject({
+      applied: false,
+      count: 0,
+    });
     expect(outlierFlag(lon, lat, new Float64Array(n).fill(1), n).count).toBe(1);
   });
 });
 
 describe('rowHash', () => {
   it('is equal for equal rows and differs when cells are split differently', () => {
-    expect(Array.from(rowHash(['Ada', '44.5', '-38.5']))).toEqual(Array.from(rowHash(['Ada', '44.5', '-38.5'])));
+    expect(Array.from(rowHash(['Ada', '44.5', '-38.5']))).toEqual(
+      Array.from(rowHash(['Ada', '44.5', '-38.5'])),
+    );
     expect(Array.from(rowHash(['ab', 'c']))).not.toEqual(Array.from(rowHash(['a', 'bc'])));
     expect(rowHash(['x'])).toHaveLength(2);
   });

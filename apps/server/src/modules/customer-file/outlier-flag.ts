@@ -35,7 +35,8 @@ export function haversineM(lon1: number, lat1: number, lon2: number, lat2: numbe
   const rad = Math.PI / 180;
   const dLat = (lat2 - lat1) * rad;
   const dLon = (lon2 - lon1) * rad;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
+  const a =
+    Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * rad) * Math.cos(lat2 * rad) * Math.sin(dLon / 2) ** 2;
   return 2 * EARTH_RADIUS_M * Math.asin(Math.min(1, Math.sqrt(a)));
 }
 
@@ -88,7 +89,12 @@ export function weightedMedian(values: Float64Array, weights: Float64Array): num
  * @example
  * const { outlier, limitM } = outlierFlag(lon, lat, w, n);
  */
-export function outlierFlag(lon: Float64Array, lat: Float64Array, w: Float64Array, count: number): OutlierResult {
+export function outlierFlag(
+  lon: Float64Array,
+  lat: Float64Array,
+  w: Float64Array,
+  count: number,
+): OutlierResult {
   const outlier = new Uint8Array(count);
   const lonV = lon.subarray(0, count);
   const latV = lat.subarray(0, count);
@@ -101,7 +107,8 @@ export function outlierFlag(lon: Float64Array, lat: Float64Array, w: Float64Arra
   const dist = new Float64Array(count);
   for (let i = 0; i < count; i++) dist[i] = haversineM(centerLon, centerLat, lonV[i], latV[i]);
   const sorted = Float64Array.from(dist).sort();
-  const spreadM = count % 2 === 1 ? sorted[(count - 1) / 2] : (sorted[count / 2 - 1] + sorted[count / 2]) / 2;
+  const spreadM =
+    count % 2 === 1 ? sorted[(count - 1) / 2] : (sorted[count / 2 - 1] + sorted[count / 2]) / 2;
   const limitM = Math.max(OUTLIER_MULTIPLE * spreadM, OUTLIER_MIN_LIMIT_M);
   let flagged = 0;
   for (let i = 0; i < count; i++) {

@@ -7,7 +7,11 @@ import { rowsRead, xlsxCellText } from './row-reader.js';
 describe('rowsRead (CSV)', () => {
   const dir = mkdtempSync(join(tmpdir(), 'ds-rows-'));
   afterAll(() => rmSync(dir, { recursive: true, force: true }));
-  const read = async (text: string | Buffer, options: Parameters<typeof rowsRead>[1], stopAfter = Infinity) => {
+  const read = async (
+    text: string | Buffer,
+    options: Parameters<typeof rowsRead>[1],
+    stopAfter = Infinity,
+  ) => {
     const path = join(dir, `f${Math.random()}.csv`);
     writeFileSync(path, text);
     const rows: string[][] = [];
@@ -19,7 +23,10 @@ describe('rowsRead (CSV)', () => {
   };
 
   it('skips blank and blank-looking lines and keeps quoted delimiters and line breaks', async () => {
-    const rows = await read('name,lat,lon\r\n"Quill, Ada",44.5,-38.5\r\n  \r\n , \r\n\r\n"two\nlines",44.6,-38.4\r\n', { format: 'csv', delimiter: ',' });
+    const rows = await read(
+      'name,lat,lon\r\n"Quill, Ada",44.5,-38.5\r\n  \r\n , \r\n\r\n"two\nlines",44.6,-38.4\r\n',
+      { format: 'csv', delimiter: ',' },
+    );
     expect(rows).toEqual([
       ['name', 'lat', 'lon'],
       ['Quill, Ada', '44.5', '-38.5'],
@@ -31,8 +38,16 @@ describe('rowsRead (CSV)', () => {
     expect(rows).toHaveLength(3);
   });
   it('decodes Latin-1 and drops the UTF-8 byte-order mark', async () => {
-    expect(await read(Buffer.from([0x4c, 0xe4, 0x6e, 0x67, 0x65, 0x3b, 0x78, 0x0a]), { format: 'csv', delimiter: ';', encoding: 'latin1' })).toEqual([['Länge', 'x']]);
-    expect(await read('\ufefflat,lon\n', { format: 'csv', delimiter: ',', encoding: 'utf-8-bom' })).toEqual([['lat', 'lon']]);
+    expect(
+      await read(Buffer.from([0x4c, 0xe4, 0x6e, 0x67, 0x65, 0x3b, 0x78, 0x0a]), {
+        format: 'csv',
+        delimiter: ';',
+        encoding: 'latin1',
+      }),
+    ).toEqual([['Länge', 'x']]);
+    expect(
+      await read('\ufefflat,lon\n', { format: 'csv', delimiter: ',', encoding: 'utf-8-bom' }),
+    ).toEqual([['lat', 'lon']]);
   });
 });
 

@@ -30,7 +30,11 @@ export type RowCallback = (fields: string[]) => boolean | void;
  * @example
  * await rowsRead(path, { format: 'csv', delimiter: ';', encoding: 'latin1' }, (fields) => { rows.push(fields); return rows.length < 21; });
  */
-export async function rowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
+export async function rowsRead(
+  path: string,
+  options: RowSourceOptions,
+  onRow: RowCallback,
+): Promise<void> {
   if (options.format === 'xlsx') return xlsxRowsRead(path, onRow);
   if (options.simpleLines && options.delimiter) return linesRowsRead(path, options, onRow);
   return csvRowsRead(path, options, onRow);
@@ -41,7 +45,11 @@ function blankRow(fields: string[]): boolean {
   return fields[0].trim() === '' && fields.every((f) => f.trim() === '');
 }
 
-async function linesRowsRead(path: string, options: RowSourceOptions, onRow: RowCallback): Promise<void> {
+async function linesRowsRead(
+  path: string,
+  options: RowSourceOptions,
+  onRow: RowCallback,
+): Promise<void> {
   const decoder = new TextDecoder(textDecoderLabel(options.encoding ?? 'utf-8'));
   const delimiter = options.delimiter!;
   const file = createReadStream(path, { highWaterMark: 1 << 20 });
@@ -151,7 +159,13 @@ export function xlsxCellText(value: unknown): string {
   if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
   if (value instanceof Date) return value.toISOString();
   if (typeof value === 'object') {
-    const v = value as { richText?: { text: string }[]; result?: unknown; text?: unknown; error?: string; sharedString?: unknown };
+    const v = value as {
+      richText?: { text: string }[];
+      result?: unknown;
+      text?: unknown;
+      error?: string;
+      sharedString?: unknown;
+    };
     if (Array.isArray(v.richText)) return v.richText.map((r) => r.text).join('');
     if ('result' in v) return xlsxCellText(v.result);
     if (v.text !== undefined) return xlsxCellText(v.text);

@@ -18,7 +18,8 @@ export const FLAG_REASONS = ['duplicate-row', 'outlier'] as const;
 export type FlagReason = (typeof FLAG_REASONS)[number];
 
 /** One row's outcome: the point, or the first reason it fails (checks run in REJECT_REASONS order). */
-export type RowOutcome = { ok: true; lon: number; lat: number; w: number } | { ok: false; reason: RejectReason };
+export type RowOutcome =
+  { ok: true; lon: number; lat: number; w: number } | { ok: false; reason: RejectReason };
 
 /**
  * Validates one row's mapped cells. Order of checks: a coordinate cell empty → missing-coordinate;
@@ -35,11 +36,18 @@ export type RowOutcome = { ok: true; lon: number; lat: number; w: number } | { o
  * @example
  * rowValidate('8.41', '53.12', '120', false, true); // { ok: true, lon: 8.41, lat: 53.12, w: 120 }
  */
-export function rowValidate(lonText: string | undefined, latText: string | undefined, weightText: string | undefined, decimalComma: boolean, weightMapped: boolean): RowOutcome {
+export function rowValidate(
+  lonText: string | undefined,
+  latText: string | undefined,
+  weightText: string | undefined,
+  decimalComma: boolean,
+  weightMapped: boolean,
+): RowOutcome {
   const lon = cellNumber(lonText, decimalComma);
   const lat = cellNumber(latText, decimalComma);
   if (lon === null || lat === null) return { ok: false, reason: 'missing-coordinate' };
-  if (Number.isNaN(lon) || Number.isNaN(lat)) return { ok: false, reason: 'non-numeric-coordinate' };
+  if (Number.isNaN(lon) || Number.isNaN(lat))
+    return { ok: false, reason: 'non-numeric-coordinate' };
   if (lon === 0 && lat === 0) return { ok: false, reason: 'null-island' };
   if (Math.abs(lat) > 90 && Math.abs(lon) <= 90) return { ok: false, reason: 'likely-swapped' };
   if (Math.abs(lat) > 90) return { ok: false, reason: 'latitude-out-of-range' };

@@ -30,7 +30,10 @@ export function sizeText(bytes: number): string {
 export function uploadReceive(uploadsDir: string, maxBytes: number): RequestHandler {
   let folderReady = false;
   const upload = multer({
-    storage: multer.diskStorage({ destination: uploadsDir, filename: (_req, _file, done) => done(null, randomUUID()) }),
+    storage: multer.diskStorage({
+      destination: uploadsDir,
+      filename: (_req, _file, done) => done(null, randomUUID()),
+    }),
     limits: { fileSize: maxBytes, files: 1, fields: 10, fieldSize: 10_000 },
   }).single('file');
   return (req, res, next) => {
@@ -41,7 +44,14 @@ export function uploadReceive(uploadsDir: string, maxBytes: number): RequestHand
     upload(req, res, (err: unknown) => {
       if (!err) {
         if (!req.file) {
-          next(new AppError(400, 'VALIDATION_FAILED', 'Send the customer file as multipart/form-data in the field "file".', 'file'));
+          next(
+            new AppError(
+              400,
+              'VALIDATION_FAILED',
+              'Send the customer file as multipart/form-data in the field "file".',
+              'file',
+            ),
+          );
           return;
         }
         next();
@@ -50,12 +60,29 @@ export function uploadReceive(uploadsDir: string, maxBytes: number): RequestHand
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') {
           const declared = Number(req.headers['content-length']);
-          const size = Number.isFinite(declared) && declared > maxBytes ? `is about ${sizeText(declared)}` : `is larger than ${sizeText(maxBytes)}`;
-          next(new AppError(413, 'FILE_TOO_LARGE', `The file ${size}; the limit is ${sizeText(maxBytes)}. Split the file or raise UPLOAD_MAX_BYTES.`, 'file'));
+          const size =
+            Number.isFinite(declared) && declared > maxBytes
+              ? `is about ${sizeText(declared)}`
+              : `is larger than ${sizeText(maxBytes)}`;
+          next(
+            new AppError(
+              413,
+              'FILE_TOO_LARGE',
+              `The file ${size}; the limit is ${sizeText(maxBytes)}. Split the file or raise UPLOAD_MAX_BYTES.`,
+              'file',
+            ),
+          );
           return;
         }
         const field = err.field ? ` (field "${err.field}")` : '';
-        next(new AppError(400, 'VALIDATION_FAILED', `Upload refused: ${err.message}${field}. Send one file in the field "file".`, 'file'));
+        next(
+          new AppError(
+            400,
+            'VALIDATION_FAILED',
+            `Upload refused: ${err.message}${field}. Send one file in the field "file".`,
+            'file',
+          ),
+        );
         return;
       }
       next(err);
