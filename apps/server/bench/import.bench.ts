@@ -1,17 +1,21 @@
 // Customer-file import benchmark: an invented 1,000,000-row CSV (lon, lat, spend and a fake name
 // column that the import discards) goes through the real HTTP upload and the real background
 // import on a SQLite file database. Prints a table: wall time per phase, rows/s and peak RSS
-// (sampled every 50 ms). Run: npm run bench:import -w @demandscape/server [-- --rows 200000]
+// (sampled every 50 ms). Run: npm run bench:import -w @demandscape/server [-- --rows 200000] [--format xlsx]
 import { createWriteStream, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { once } from 'node:events';
+import ExcelJS from 'exceljs';
 import request from 'supertest';
 import { createApp } from '../src/app.js';
 import { configFromEnv } from '../src/config.js';
 
 const rowsArg = process.argv.indexOf('--rows');
 const ROWS = rowsArg > 0 ? Number(process.argv[rowsArg + 1]) : 1_000_000;
+const formatArg = process.argv.indexOf('--format');
+const FORMAT: 'csv' | 'xlsx' =
+  formatArg > 0 && process.argv[formatArg + 1] === 'xlsx' ? 'xlsx' : 'csv';
 
 /** Seeded LCG (Numerical Recipes constants) so every run writes the same file. */
 function random(seed: number): () => number {
@@ -41,6 +45,27 @@ async function csvWrite(path: string, rows: number): Promise<void> {
   await once(out, 'finish');
 }
 
+async function xlsxWrite(path: string, rows: number): Promise<void> {
+  const rnd = random(20261202);
+  const wb = new ExcelJS.stream.xlsx.WorkbookWriter({ filename: path, useSharedStrings: false });
+  const sheet = wb.addWorksheet('Customers');
+  sheet.addRow(['customer_name', 'lon', 'lat', 'spend']).commit();
+  for (let i = 0; i < rows; i++) {
+    const r = 0.08 * Math.sqrt(-2 * Math.log(1 - rnd()));
+    const a = 2 * Math.PI * rnd();
+    sheet
+      .addRow([
+        `Larchloaf Guest ${i}`,
+        -38.5 + (r * Math.cos(a)) / 0.713,
+        44.5 + r * Math.sin(a),
+        5 + 400 * rnd(),
+      ])
+      .commit();
+  }
+  sheet.commit();
+  await wb.commit();
+}
+
 let peakRss = 0;
 const sampler = setInterval(() => {
   peakRss = Math.max(peakRss, process.memoryUsage().rss);
@@ -48,8 +73,9 @@ const sampler = setInterval(() => {
 
 const dir = mkdtempSync(join(tmpdir(), 'ds-import-bench-'));
 try {
-  const csv = join(dir, 'customers.csv');
-  await csvWrite(csv, ROWS);
+  const csv = join(dir, `customers.${FORMAT}`);
+  if (FORMAT === 'xlsx') await xlsxWrite(csv, ROWS);
+  else await csvWrite(csv, ROWS);
   const sizeMb = statSync(csv).size / 1024 / 1024;
   const ds = await createApp(
     configFromEnv({
@@ -118,7 +144,7 @@ try {
   const cpu = (a: NodeJS.CpuUsage, b: NodeJS.CpuUsage) =>
     ((b.user - a.user + b.system - a.system) / 1e6).toFixed(2);
   console.log(
-    `\nCustomer-file import, ${ROWS.toLocaleString('en')} rows, ${sizeMb.toFixed(1)} MB CSV (lon, lat, spend + a name column that is discarded), SQLite file database\n`,
+    `\nCustomer-file import, ${ROWS.toLocaleString('en')} rows, ${sizeMb.toFixed(1)} MB ${FORMAT.toUpperCase()} (lon, lat, spend + a name column that is discarded), SQLite file database\n`,
   );
   console.log('| phase | wall (s) | CPU (s) | rows/s (wall) | notes |');
   console.log('|---|---:|---:|---:|---|');
