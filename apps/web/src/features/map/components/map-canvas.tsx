@@ -18,7 +18,7 @@ export type MapCanvasProps = {
   /** West, south, east, north to fit once per `fitKey` (the surface's extent). */
   fitBounds?: [number, number, number, number] | null;
   fitKey?: string | null;
-  surfaceImage?: { url: string; corners: Corners } | null;
+  surfaceImage?: { canvas: HTMLCanvasElement; corners: Corners } | null;
   surfaceOpacity?: number;
   contours?: FeatureCollection | null;
   contourVisible?: Record<number, boolean>;
@@ -51,7 +51,8 @@ export function MapCanvas(props: MapCanvasProps) {
     if (!container.current) return;
     const instance = mapInstanceCreate(container.current, props.style, props.initialView);
     instance.on('error', (event: { error?: Error }) => {
-      setError(event.error?.message ?? 'The map reported a problem it did not explain.');
+      const message = event.error?.message ?? 'The map reported a problem it did not explain.';
+      setError(message.length > 300 ? `${message.slice(0, 300)}…` : message);
     });
     instance.on('load', () => {
       setMap(instance);

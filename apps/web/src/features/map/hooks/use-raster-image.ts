@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { imageUrlFromRgba } from '../lib/map-instance';
+import { canvasFromRgba } from '../lib/map-instance';
 import { colourTable, densityInterpolator, differenceInterpolator } from '../utils/colour-ramp';
 import { RASTER_FADE_SHARE, RASTER_FLOOR_SHARE, rasterMaxAbs, rasterRgba } from '../utils/raster-colouring';
 import { rasterCorners, type WebRaster } from '../utils/web-raster';
@@ -12,7 +12,7 @@ const differenceTable = colourTable(differenceInterpolator);
  * @param raster the surface or difference raster, or undefined while loading
  * @param kind sequential (demand) or diverging (difference)
  * @param sharedTop a scale top to use instead of the raster's own (side-by-side maps share one scale)
- * @returns the image URL with its corners and the scale top, or null with an error message when it cannot be drawn
+ * @returns the painted canvas with its corners and the scale top, or null with an error message when it cannot be drawn
  * @example const { image, scaleTop } = useRasterImage(raster.data, 'sequential');
  */
 export function useRasterImage(raster: WebRaster | undefined, kind: 'sequential' | 'diverging', sharedTop?: number) {
@@ -23,8 +23,8 @@ export function useRasterImage(raster: WebRaster | undefined, kind: 'sequential'
     const floor = top * RASTER_FLOOR_SHARE;
     const scale = kind === 'sequential' ? { kind, max: top, floor, fade: RASTER_FADE_SHARE } : { kind, maxAbs: top, floor };
     try {
-      const url = imageUrlFromRgba(rasterRgba(raster.values, kind === 'sequential' ? densityTable : differenceTable, scale), raster.width, raster.height);
-      return { image: { url, corners: rasterCorners(raster.bounds) }, scaleTop: top, error: null };
+      const canvas = canvasFromRgba(rasterRgba(raster.values, kind === 'sequential' ? densityTable : differenceTable, scale), raster.width, raster.height);
+      return { image: { canvas, corners: rasterCorners(raster.bounds) }, scaleTop: top, error: null };
     } catch (error) {
       return { image: null, scaleTop: top, error: error instanceof Error ? error.message : String(error) };
     }

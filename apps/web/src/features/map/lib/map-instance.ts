@@ -41,14 +41,15 @@ export function markerAdd(element: HTMLElement, lngLat: [number, number], map: M
 }
 
 /**
- * Paints RGBA bytes on a canvas and returns it as a PNG data URL for an image source.
+ * Paints RGBA bytes on a canvas for a MapLibre canvas source. A canvas, not a data/blob URL: MapLibre
+ * fetches image URLs, and the server's Content-Security-Policy rightly allows no `connect-src data:`.
  * @param rgba 4 bytes per pixel, row 0 at the top
  * @param width pixels
  * @param height pixels
- * @returns a `data:image/png` URL
- * @example imageUrlFromRgba(rasterRgba(values, table, scale), raster.width, raster.height)
+ * @returns the painted canvas (not attached to the page)
+ * @example canvasFromRgba(rasterRgba(values, table, scale), raster.width, raster.height)
  */
-export function imageUrlFromRgba(rgba: Uint8ClampedArray, width: number, height: number): string {
+export function canvasFromRgba(rgba: Uint8ClampedArray, width: number, height: number): HTMLCanvasElement {
   const canvas = document.createElement('canvas');
   canvas.width = width;
   canvas.height = height;
@@ -57,5 +58,5 @@ export function imageUrlFromRgba(rgba: Uint8ClampedArray, width: number, height:
   const image = context.createImageData(width, height);
   image.data.set(rgba);
   context.putImageData(image, 0, 0);
-  return canvas.toDataURL('image/png');
+  return canvas;
 }

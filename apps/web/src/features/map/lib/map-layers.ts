@@ -1,5 +1,5 @@
 import type { FeatureCollection, Geometry } from 'geojson';
-import type { ExpressionSpecification, GeoJSONSource, ImageSource, Map as MapLibreMap } from 'maplibre-gl';
+import type { ExpressionSpecification, GeoJSONSource, Map as MapLibreMap } from 'maplibre-gl';
 import { SURFACE_BEFORE_LAYER } from './basemap-style';
 
 /** Corners of an image source: NW, NE, SE, SW. */
@@ -19,6 +19,9 @@ export const contourDash: Record<number, number[] | undefined> = { 50: undefined
 /** Contour line colour: the theme's ink, dark on both ends of the ramp's light half and the basemap. */
 export const CONTOUR_COLOUR = '#1f2b38';
 
+/** The canvas each map's surface source was made from (a new canvas means a new source). */
+const shownCanvas = new WeakMap<MapLibreMap, HTMLCanvasElement>();
+
 function beforeId(map: MapLibreMap, preferred: string): string | undefined {
   return map.getLayer(preferred) ? preferred : undefined;
 }
@@ -28,24 +31,26 @@ function layerRemove(map: MapLibreMap, ...ids: string[]): void {
 }
 
 /**
- * Shows (or updates, or removes with `null`) a coloured raster as an image source between the
- * basemap's areas and its rivers and roads.
+ * Shows (or replaces, or removes with `null`) a coloured raster as a canvas source between the
+ * basemap's areas and its rivers and roads. A new canvas replaces the source (canvas sources cannot swap canvases).
  * @param map the map (style loaded)
- * @param image the PNG data URL and its corners, or null to remove
+ * @param image the painted canvas and its corners, or null to remove
  * @param opacity 0–1
  * @returns nothing
- * @example surfaceLayerSync(map, { url, corners: rasterCorners(raster.bounds) }, 0.8)
+ * @example surfaceLayerSync(map, { canvas, corners: rasterCorners(raster.bounds) }, 0.8)
  */
-export function surfaceLayerSync(map: MapLibreMap, image: { url: string; corners: Corners } | null, opacity: number): void {
+export function surfaceLayerSync(map: MapLibreMap, image: { canvas: HTMLCanvasElement; corners: Corners } | null, opacity: number): void {
   const id = mapLayerIds.surface;
-  const source = map.getSource(id) as ImageSource | undefined;
-  if (!image) {
+  if (!image || shownCanvas.get(map) !== image.canvas) {
     layerRemove(map, id);
-    if (source) map.removeSource(id);
-    return;
+    if (map.getSource(id)) map.removeSource(id);
+    shownCanvas.delete(map);
   }
-  if (source) source.updateImage({ url: image.url, coordinates: image.corners });
-  else map.addSource(id, { type: 'image', url: image.url, coordinates: image.corners });
+  if (!image) return;
+  if (!map.getSource(id)) {
+    map.addSource(id, { type: 'canvas', canvas: image.canvas, coordinates: image.corners, animate: false });
+    shownCanvas.set(map, image.canvas);
+  }
   if (!map.getLayer(id)) {
     map.addLayer(
       // Nearest resampling: the colour under the cursor is the value the read-out shows.

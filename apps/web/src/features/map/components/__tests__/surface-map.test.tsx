@@ -23,7 +23,7 @@ vi.mock('../../lib/map-instance', () => ({
     return map;
   }),
   markerAdd: vi.fn(() => () => undefined),
-  imageUrlFromRgba: vi.fn((_rgba: Uint8ClampedArray, w: number, h: number) => `data:image/png;fake,${w}x${h}`),
+  canvasFromRgba: vi.fn((_rgba: Uint8ClampedArray, width: number, height: number) => ({ width, height }) as HTMLCanvasElement),
 }));
 
 const basemap = readFileSync(join(dirname(fileURLToPath(import.meta.url)), '../../../../../public/basemap/quillport.geojson'), 'utf8');
@@ -118,8 +118,9 @@ describe('SurfaceMap', () => {
     renderWithProviders(<SurfaceMap scope={scope} surface={createMapSurface()} customerFile={countFile} role="planner" />);
     const map = await loadedMap();
     expect(map.sources.get('ds-surface')).toEqual({
-      type: 'image',
-      url: `data:image/png;fake,${SIZE.width}x${SIZE.height}`,
+      type: 'canvas',
+      canvas: { width: SIZE.width, height: SIZE.height },
+      animate: false,
       coordinates: [
         [-38.7, 44.65],
         [-38.3, 44.65],
