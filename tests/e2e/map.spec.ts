@@ -113,6 +113,18 @@ describe('the demand surface map in a real browser', () => {
       (r) => ['succeeded', 'failed', 'cancelled'].includes(r.surface.status),
     );
     expect(done.surface.status).toBe('succeeded');
+    const { surface: narrow } = await api.call<{ surface: { id: string } }>('POST', `${ws}/surfaces`, {
+      customerFileId: customerFile.id,
+      name: 'Quillport spend, 800 m',
+      bandwidth: { mode: 'value', value: 800 },
+      unit: 'km2',
+    });
+    const second = await until(
+      'The second surface run',
+      () => api.call<{ surface: { status: string } }>('GET', `${ws}/surfaces/${narrow.id}`),
+      (r) => ['succeeded', 'failed', 'cancelled'].includes(r.surface.status),
+    );
+    expect(second.surface.status).toBe('succeeded');
 
     context = await browserLaunch();
     await context.addCookies([...api.cookies].map(([name, value]) => ({ name, value, url: server.baseUrl })));
@@ -164,5 +176,24 @@ describe('the demand surface map in a real browser', () => {
     expect(pageErrors).toEqual([]);
     expect(consoleErrors).toEqual([]);
     await expect(page.getByText('The map could not draw everything').count()).resolves.toBe(0);
+  });
+
+  it('shows aggregated customers in suppressed squares and the difference between two surfaces', async () => {
+    await page.getByLabel(/Show customers/).check();
+    await page.getByText(/customers per [\d.,]+ (m|km) square/).waitFor();
+    await page.getByText(/fewer than 11 customers are hidden/).waitFor();
+    const compare = page.getByLabel('Compare with');
+    const options = await compare.locator('option').allTextContents();
+    const other = options.find((o) => o !== 'No comparison')!;
+    await compare.selectOption({ label: other });
+    await page.getByText(`Difference: ${other} minus this one`).waitFor();
+    await page.waitForTimeout(1500);
+    await page.screenshot({ path: join(artifacts, 'map-difference.png'), fullPage: true });
+    await page.getByRole('radio', { name: 'Side by side' }).click();
+    await expect.poll(() => page.locator('canvas.maplibregl-canvas').count()).toBe(2);
+    await page.waitForTimeout(1500);
+    await page.screenshot({ path: join(artifacts, 'map-side-by-side.png'), fullPage: true });
+    expect(pageErrors).toEqual([]);
+    expect(consoleErrors).toEqual([]);
   });
 });

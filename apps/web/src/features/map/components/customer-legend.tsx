@@ -1,7 +1,7 @@
 import { ColourLegend } from '@demandscape/ui';
 import { interpolateGnBu } from 'd3-scale-chromatic';
 import { rampStops } from '../utils/colour-ramp';
-import { valueText } from '../utils/density-unit';
+import { tickText } from '../utils/density-unit';
 import { sequentialLegendTicks } from '../utils/legend-scale';
 
 /** Customer bins: ColorBrewer GnBu (sequential, colour-blind safe), distinct from the surface's cividis. */
@@ -25,7 +25,7 @@ export function customerColourStops(maxCount: number): Array<[number, string]> {
  * @example <CustomerLegend maxCount={120} binSizeM={500} minCount={11} />
  */
 export function CustomerLegend(props: { maxCount: number; binSizeM?: number; minCount?: number; suppressedCustomers?: number }) {
-  const side = props.binSizeM ? (props.binSizeM >= 1000 ? `${valueText(props.binSizeM / 1000)} km` : `${props.binSizeM} m`) : null;
+  const side = props.binSizeM ? (props.binSizeM >= 1000 ? `${tickText(props.binSizeM / 1000)} km` : `${props.binSizeM} m`) : null;
   return (
     <ColourLegend
       title="Customers"

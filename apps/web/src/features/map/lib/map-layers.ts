@@ -119,7 +119,7 @@ export function customerLayerSync(map: MapLibreMap, bins: FeatureCollection<Geom
   else map.addSource(id, { type: 'geojson', data: bins });
   const fill = ['interpolate', ['linear'], ['get', 'count'], ...colours.flat()] as unknown as ExpressionSpecification;
   if (!map.getLayer(id)) {
-    map.addLayer({ id, type: 'fill', source: id, paint: { 'fill-color': fill, 'fill-opacity': 0.7 } }, beforeId(map, SURFACE_BEFORE_LAYER));
+    map.addLayer({ id, type: 'fill', source: id, paint: { 'fill-color': fill, 'fill-opacity': 0.55 } }, beforeId(map, SURFACE_BEFORE_LAYER));
     map.addLayer(
       { id: mapLayerIds.customersOutline, type: 'line', source: id, paint: { 'line-color': '#ffffff', 'line-width': 0.5, 'line-opacity': 0.6 } },
       beforeId(map, SURFACE_BEFORE_LAYER),
