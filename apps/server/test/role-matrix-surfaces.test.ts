@@ -45,7 +45,7 @@ function expectedStatus(row: RouteRow, caller: Caller): number {
   return 403;
 }
 
-describe('role matrix: surfaces', { timeout: 120_000 }, () => {
+describe('role matrix: surfaces', { timeout: 240_000 }, () => {
   let ds: DemandscapeApp;
   const clients = {} as Record<Caller, TestClient>;
   let ids: { orgId: string; wsId: string; fileId: string };

@@ -18,7 +18,7 @@ function square(d: number): number[][][] {
   ];
 }
 
-describe('POST …/surfaces/estimate', { timeout: 60_000 }, () => {
+describe('POST …/surfaces/estimate', { timeout: 120_000 }, () => {
   let ds: DemandscapeApp;
   let owner: TestClient;
   let url: string;

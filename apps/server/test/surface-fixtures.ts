@@ -140,7 +140,7 @@ export async function customerPointsChunksStore(
  * @example
  * const s = await surfaceWait(() => getSurface(id), (s) => s.status === 'succeeded');
  */
-export async function surfaceWait<T extends { status: string }>(get: () => Promise<T>, done: (s: T) => boolean, timeoutMs = 25_000): Promise<T> {
+export async function surfaceWait<T extends { status: string }>(get: () => Promise<T>, done: (s: T) => boolean, timeoutMs = 90_000): Promise<T> {
   const until = Date.now() + timeoutMs;
   for (;;) {
     const s = await get();

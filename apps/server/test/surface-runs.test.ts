@@ -12,7 +12,7 @@ interface SurfaceBody {
   [key: string]: unknown;
 }
 
-describe('surface runs: lifecycle and results', { timeout: 120_000 }, () => {
+describe('surface runs: lifecycle and results', { timeout: 240_000 }, () => {
   let ds: DemandscapeApp;
   let owner: TestClient;
   let base: string;

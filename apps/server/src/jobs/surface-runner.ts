@@ -1,12 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
-import { fileURLToPath } from 'node:url';
 import type { Worker } from 'node:worker_threads';
 import type { MikroORM } from '@mikro-orm/sqlite';
 import type Bree from 'bree';
 import type { Logger } from 'pino';
 import type { ComputeSurfaceInput, ComputeSurfaceMessage } from './compute-surface.js';
-import { surfaceBreeCreate } from './surface-worker-start.js';
+import { computeSurfaceFile, surfaceBreeCreate } from './surface-worker-start.js';
 import { customerPointsLoad } from '../modules/customer-file/customer-points.js';
 import type { Mailer } from '../modules/mail/mailer.js';
 import { surfaceCreditsCharge, surfaceCreditsRelease } from '../modules/surface/surface-credits.js';
@@ -40,12 +39,6 @@ interface Active {
 
 /** Progress rows are written at least this far apart (ms). */
 const PROGRESS_WRITE_MS = 250;
-
-function jobFile(): string {
-  // Built code runs dist/jobs/compute-surface.js; source runs (tests, tsx) the .ts file.
-  const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
-  return fileURLToPath(new URL(`./compute-surface${ext}`, import.meta.url));
-}
 
 /**
  * Runs queued demand surfaces in worker threads (through Bree). Claims rows atomically (several
@@ -206,15 +199,16 @@ export class SurfaceRunner {
     const points = await customerPointsLoad(em, surface.customerFileId);
     const jobName = `surface-${id}`;
     const bree = this.bree!;
-    await bree.add({ name: jobName, path: jobFile() });
+    await bree.add({ name: jobName, path: computeSurfaceFile() });
     await bree.run(jobName);
     const worker = bree.workers.get(jobName);
     if (!worker) throw new Error(`Bree did not start the worker for ${jobName}`);
     const a: Active = { worker, jobName, lastProgressWrite: 0, settled: false };
     this.active.set(id, a);
     worker.on('message', (m: ComputeSurfaceMessage) => void this.onMessage(id, a, m));
+    worker.on('error', (err) => this.options.log.error({ err, surfaceId: id }, 'surface worker error'));
     worker.on('exit', () => void this.onExit(id, a));
-    const input: ComputeSurfaceInput = { lon: points.lon, lat: points.lat, w: points.w, params: surface.params };
+    const input: ComputeSurfaceInput = { mode: 'compute', lon: points.lon, lat: points.lat, w: points.w, params: surface.params };
     worker.postMessage(input, [points.lon.buffer, points.lat.buffer, points.w.buffer] as ArrayBuffer[]);
   }
 
@@ -228,7 +222,7 @@ export class SurfaceRunner {
       } else if (m.type === 'result') {
         a.settled = true;
         await this.finishSucceeded(id, m.result);
-      } else {
+      } else if (m.type === 'error') {
         a.settled = true;
         await this.finishFailed(id, m.code, m.message);
       }

@@ -75,6 +75,21 @@ function pointsExtent(points: PlanarPoints, pad: number): Extent {
   return { minX: minX - pad, minY: minY - pad, maxX: maxX + pad, maxY: maxY + pad };
 }
 
+/** A plan without the typed arrays and functions: what crosses threads and what the estimate shows. */
+export type SurfacePlanSummary = Omit<SurfacePlan, 'points' | 'converter' | 'mask'>;
+
+/**
+ * The summary of a plan (drops points, projection functions and mask).
+ * @param plan from {@link surfacePlan}
+ * @returns the plain-data part
+ * @example
+ * port.postMessage(surfacePlanSummary(plan));
+ */
+export function surfacePlanSummary(plan: SurfacePlan): SurfacePlanSummary {
+  const { points: _p, converter: _c, mask: _m, ...rest } = plan;
+  return rest;
+}
+
 /**
  * Plans a surface run from customer points and the form's parameters: validate and project the
  * points (UTM zone of the data), pick the bandwidth (rule or value), the cell size (given or

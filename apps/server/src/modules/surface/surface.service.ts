@@ -9,8 +9,7 @@ import { customerPointsLoad } from '../customer-file/customer-points.js';
 import type { User } from '../user/user.entity.js';
 import { WorkspaceSchema } from '../workspace/workspace.entity.js';
 import { surfaceCreditsRelease, surfaceCreditsReserve } from './surface-credits.js';
-import { coreInputErrors } from './surface-errors.js';
-import { surfacePlan } from './surface-plan.js';
+import { surfacePlanOffThread } from './surface-plan-off-thread.js';
 import { SurfaceSchema, type Surface } from './surface.entity.js';
 import type { SurfaceCreateInput, SurfaceParams } from './surface.schemas.js';
 
@@ -118,8 +117,9 @@ async function planForInput(em: EntityManager, scope: SurfaceScope, input: Surfa
   }
   const points = await customerPointsLoad(em, file.id);
   const { customerFileId: _id, name: _name, ...params } = input;
-  const plan = coreInputErrors(() => surfacePlan(points.lon, points.lat, points.w, params));
-  return { file, plan, params, count: points.count };
+  const count = points.count;
+  const plan = await surfacePlanOffThread(points, params);
+  return { file, plan, params, count };
 }
 
 /**
