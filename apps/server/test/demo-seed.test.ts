@@ -1,5 +1,9 @@
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DemandscapeApp } from '../src/app.js';
+import { DEMO_CUSTOMER_COUNT, DEMO_CUSTOMER_FILE_NAME } from '../src/seed/demo-customer-file.js';
 import { DEMO_ORGANIZATION, DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE, demoSeed } from '../src/seed/demo-seed.js';
 import { testAppCreate, testClient } from './utils.js';
 
@@ -30,5 +34,58 @@ describe('demoSeed', () => {
       const list = await c.get(`/api/organizations/${orgId}/workspaces`).expect(200);
       expect(list.body.workspaces.map((w: { name: string }) => w.name)).toEqual([DEMO_WORKSPACE.name]);
     }
+  });
+});
+
+describe('demoSeed with the demo customer file', () => {
+  let ds: DemandscapeApp;
+  let dataDir: string;
+  beforeAll(async () => {
+    dataDir = mkdtempSync(join(tmpdir(), 'ds-demo-seed-'));
+    ds = await testAppCreate({ DATA_DIR: dataDir });
+  });
+  afterAll(async () => {
+    await ds.close();
+    rmSync(dataDir, { recursive: true, force: true });
+  });
+
+  it('uploads and imports the invented customers through the import path, once', async () => {
+    const uploadsDir = join(dataDir, 'uploads');
+    const imports = { orm: ds.orm, uploadsDir };
+    const first = await demoSeed(ds.orm.em.fork(), imports);
+    expect(first.created).toContain(`customer file ${DEMO_CUSTOMER_FILE_NAME}`);
+    const second = await demoSeed(ds.orm.em.fork(), imports);
+    expect(second.created).toEqual([]);
+
+    const analyst = await testClient(ds);
+    await analyst.post('/api/auth/sign-in', { email: 'analyst@larchloaf.example', password: DEMO_PASSWORD }).expect(200);
+    await analyst.refresh();
+    const list = await analyst.get(`/api/organizations/${first.organizationId}/workspaces/${first.workspaceId}/customer-files`).expect(200);
+    expect(list.body.customerFiles).toHaveLength(1);
+    const f = list.body.customerFiles[0];
+    // Exact counts: the generator is seeded and the bad rows are fixed (see demo-customer-file.ts).
+    expect(f).toMatchObject({
+      name: DEMO_CUSTOMER_FILE_NAME,
+      status: 'imported',
+      weightKind: 'spend',
+      weightLabel: 'annual spend (€)',
+      rowCount: DEMO_CUSTOMER_COUNT + 21 + 3,
+      acceptedCount: DEMO_CUSTOMER_COUNT + 4 + 3,
+      rejectedCount: 17,
+    });
+    expect(f.report.rejected).toEqual({
+      'missing-coordinate': 4,
+      'non-numeric-coordinate': 4,
+      'null-island': 2,
+      'likely-swapped': 1,
+      'longitude-out-of-range': 1,
+      'negative-weight': 3,
+      'non-numeric-weight': 2,
+    });
+    expect(f.report.flagged).toEqual({ 'duplicate-row': 3, outlier: 4 });
+    expect(f.flaggedCount).toBe(3 + 4);
+    expect(f.createdBy).toMatchObject({ name: DEMO_USERS.find((u) => u.role === 'analyst')!.name });
+    // Only coordinates and spend are kept: the raw upload is gone.
+    expect(readdirSync(uploadsDir)).toEqual([]);
   });
 });

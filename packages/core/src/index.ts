@@ -56,3 +56,4 @@ export * from './scoring/site-ranking.js';
 export * from './scoring/kendall-tau.js';
 export * from './scoring/kde-binned-multi-bandwidth.js';
 export * from './scoring/rank-stability.js';
+export * from './cli/demo-customers.js';

@@ -1,4 +1,4 @@
-import type { EntityManager } from '@mikro-orm/sqlite';
+import type { EntityManager, MikroORM } from '@mikro-orm/sqlite';
 import { passwordHash } from '../modules/auth/password-hash.js';
 import { billingDemoSetup } from '../modules/billing/billing-notify.js';
 import { entityId } from '../modules/common/base.entity.js';
@@ -6,6 +6,7 @@ import { MembershipSchema, type Membership, type Role } from '../modules/organiz
 import { OrganizationSchema, type Organization } from '../modules/organization/organization.entity.js';
 import { UserSchema, type User } from '../modules/user/user.entity.js';
 import { WorkspaceSchema, type Workspace } from '../modules/workspace/workspace.entity.js';
+import { DEMO_CUSTOMER_FILE_NAME, demoCustomerFileSeed } from './demo-customer-file.js';
 
 /** The one password of every demo account (invented data; never use it for anything real). */
 export const DEMO_PASSWORD = 'larchloaf-demo-2027';
@@ -24,15 +25,27 @@ export const DEMO_WORKSPACE = {
   description: 'Where should Larchloaf open its seventh café? Eight candidate sites along the north corridor of Quillport, weighed against three competitor chains. (Invented demo data.)',
 };
 
+/** What the demo customer file needs: the ORM (the import forks its own entity manager) and UPLOADS_DIR. */
+export interface DemoSeedImport {
+  orm: MikroORM;
+  uploadsDir: string;
+}
+
 /**
- * Creates the invented demo organization, its workspace and one user per role. Idempotent: what
- * exists is left as it is (passwords of existing demo users are not reset).
+ * Creates the invented demo organization, its workspace and one user per role; with `imports`,
+ * also the invented demo customer file (uploaded and imported by the demo analyst) when the
+ * workspace has no customer file yet. Idempotent: what exists is left as it is (passwords of
+ * existing demo users are not reset).
  * @param em - entity manager (a fork)
+ * @param imports - ORM and uploads folder for the demo customer file (left out: no customer file)
  * @returns what was created this time
  * @example
- * const { created } = await demoSeed(orm.em.fork());
+ * const { created } = await demoSeed(orm.em.fork(), { orm, uploadsDir: config.uploadsDir });
  */
-export async function demoSeed(em: EntityManager): Promise<{ created: string[]; organizationId: string; workspaceId: string }> {
+export async function demoSeed(
+  em: EntityManager,
+  imports?: DemoSeedImport,
+): Promise<{ created: string[]; organizationId: string; workspaceId: string }> {
   const created: string[] = [];
   let org = await em.findOne(OrganizationSchema, { slug: DEMO_ORGANIZATION.slug });
   if (!org) {
@@ -41,6 +54,7 @@ export async function demoSeed(em: EntityManager): Promise<{ created: string[]; 
   }
   const hash = await passwordHash(DEMO_PASSWORD);
   let owner: User | null = null;
+  let analyst: User | null = null;
   for (const demo of DEMO_USERS) {
     let user = await em.findOne(UserSchema, { email: demo.email });
     if (!user) {
@@ -48,6 +62,7 @@ export async function demoSeed(em: EntityManager): Promise<{ created: string[]; 
       created.push(`user ${demo.email}`);
     }
     if (demo.role === 'owner') owner = user;
+    if (demo.role === 'analyst') analyst = user;
     const membership = await em.findOne(MembershipSchema, { organization: org.id, user: user.id });
     if (!membership) {
       em.create(MembershipSchema, { id: entityId(), organization: org, user, role: demo.role } as Membership);
@@ -61,5 +76,10 @@ export async function demoSeed(em: EntityManager): Promise<{ created: string[]; 
   }
   await em.flush();
   await billingDemoSetup(em, org.id);
+  if (imports && analyst) {
+    const scope = { organizationId: org.id, workspaceId: workspace.id };
+    const fileId = await demoCustomerFileSeed(em, imports.orm, imports.uploadsDir, scope, analyst);
+    if (fileId) created.push(`customer file ${DEMO_CUSTOMER_FILE_NAME}`);
+  }
   return { created, organizationId: org.id, workspaceId: workspace.id };
 }
