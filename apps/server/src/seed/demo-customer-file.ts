@@ -68,7 +68,7 @@ export function demoCustomerCsv(): string {
 /**
  * Adds the demo customer file to the demo workspace when it has no customer file yet: writes the
  * CSV into the uploads folder and runs it through the same register → map → import steps as an
- * upload by the demo analyst, then waits for the import to finish.
+ * upload by the demo analyst (flagged rows left out), then waits for the import to finish.
  * @param em - entity manager (a fork)
  * @param orm - the ORM (the import forks its own entity manager)
  * @param uploadsDir - UPLOADS_DIR
@@ -102,6 +102,9 @@ export async function demoCustomerFileSeed(
     mapping: { lon: 'lon', lat: 'lat', weight: 'spend' },
     weightKind: 'spend',
     weightLabel: 'annual spend (€)',
+    // The swapped rows lie thousands of km away: kept in the stored points they would stretch the
+    // data extent of every surface, so the demo leaves flagged rows out (the report still lists them).
+    excludeFlagged: true,
   });
   await customerFileImport(orm, customerFile.id, uploadsDir);
   return customerFile.id;

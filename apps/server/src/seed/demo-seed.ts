@@ -7,6 +7,7 @@ import { OrganizationSchema, type Organization } from '../modules/organization/o
 import { UserSchema, type User } from '../modules/user/user.entity.js';
 import { WorkspaceSchema, type Workspace } from '../modules/workspace/workspace.entity.js';
 import { DEMO_CUSTOMER_FILE_NAME, demoCustomerFileSeed } from './demo-customer-file.js';
+import { DEMO_SURFACE_NAME, demoSurfaceQueue } from './demo-surface.js';
 
 /** The one password of every demo account (invented data; never use it for anything real). */
 export const DEMO_PASSWORD = 'larchloaf-demo-2027';
@@ -33,8 +34,8 @@ export interface DemoSeedImport {
 
 /**
  * Creates the invented demo organization, its workspace and one user per role; with `imports`,
- * also the invented demo customer file (uploaded and imported by the demo analyst) when the
- * workspace has no customer file yet. Idempotent: what exists is left as it is (passwords of
+ * also the invented demo customer file (uploaded and imported by the demo analyst) and one queued
+ * demand surface on it, when the workspace has no customer file yet. Idempotent: what exists is left as it is (passwords of
  * existing demo users are not reset).
  * @param em - entity manager (a fork)
  * @param imports - ORM and uploads folder for the demo customer file (left out: no customer file)
@@ -79,7 +80,11 @@ export async function demoSeed(
   if (imports && analyst) {
     const scope = { organizationId: org.id, workspaceId: workspace.id };
     const fileId = await demoCustomerFileSeed(em, imports.orm, imports.uploadsDir, scope, analyst);
-    if (fileId) created.push(`customer file ${DEMO_CUSTOMER_FILE_NAME}`);
+    if (fileId) {
+      created.push(`customer file ${DEMO_CUSTOMER_FILE_NAME}`);
+      await demoSurfaceQueue(em, scope, analyst, fileId);
+      created.push(`queued surface ${DEMO_SURFACE_NAME}`);
+    }
   }
   return { created, organizationId: org.id, workspaceId: workspace.id };
 }
