@@ -71,6 +71,8 @@ export async function serverStart(options: {
       DATA_DIR: dataDir,
       START_STANDINS: 'true',
       DEMO_SEED: options.demoSeed ? 'true' : 'false',
+      // These specs start from the demo people and credits only (no demo customer file or surface).
+      DEMO_CUSTOMERS: 'false',
       MAIL_TRANSPORT: 'capture',
       OAUTH_FAKE_PORT: String(oauthPort),
       OAUTH_FAKE_EMAIL: options.googleEmail,

@@ -44,6 +44,7 @@ const envSchema = z.object({
   MAIL_CATCHER_WEB_PORT: portFromEnv(1080),
   START_STANDINS: booleanFromEnv.optional(),
   DEMO_SEED: booleanFromEnv.optional(),
+  DEMO_CUSTOMERS: booleanFromEnv.default(true),
   RATE_LIMIT_AUTH_PER_MINUTE: z.coerce.number({ message: 'must be a whole number' }).int().min(1, 'must be at least 1').default(10),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   WEB_DIST: z.string().min(1).optional(),
@@ -82,6 +83,8 @@ export interface AppConfig {
   mail: { transport: 'smtp' | 'capture'; smtpUrl: string; from: string; catcherSmtpPort: number; catcherWebPort: number };
   startStandIns: boolean;
   demoSeed: boolean;
+  /** With demoSeed: also the invented demo customer file and one queued surface (DEMO_CUSTOMERS, default true). */
+  demoCustomers: boolean;
   rateLimitAuthPerMinute: number;
   logLevel: string;
   webDist: string;
@@ -188,6 +191,7 @@ export function configFromEnv(env: Record<string, string | undefined>): AppConfi
     },
     startStandIns: e.START_STANDINS ?? e.NODE_ENV === 'development',
     demoSeed: e.DEMO_SEED ?? e.NODE_ENV === 'development',
+    demoCustomers: e.DEMO_CUSTOMERS,
     rateLimitAuthPerMinute: e.RATE_LIMIT_AUTH_PER_MINUTE,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     webDist: resolve(e.WEB_DIST ?? join(packageDir, '..', 'web', 'dist')),

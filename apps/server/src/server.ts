@@ -53,7 +53,7 @@ if (config.startStandIns && config.billing.usesLocalFake) {
 }
 const ds = await createApp(config);
 stops.unshift(() => ds.close());
-if (config.demoSeed) await demoSeed(ds.orm.em.fork(), { orm: ds.orm, uploadsDir: config.uploadsDir });
+if (config.demoSeed) await demoSeed(ds.orm.em.fork(), config.demoCustomers ? { orm: ds.orm, uploadsDir: config.uploadsDir } : undefined);
 await ds.surfaceRunner.start();
 
 const server: Server = ds.app.listen(config.port, config.host ?? '::');

@@ -6,7 +6,7 @@ import { DEMO_PASSWORD, DEMO_USERS, demoSeed } from './demo-seed.js';
 try {
   const config = configFromEnv(process.env);
   const orm = await ormInit(config.databaseFile);
-  const { created } = await demoSeed(orm.em.fork(), { orm, uploadsDir: config.uploadsDir });
+  const { created } = await demoSeed(orm.em.fork(), config.demoCustomers ? { orm, uploadsDir: config.uploadsDir } : undefined);
   await orm.close(true);
   console.log(created.length ? `Demo data added: ${created.join(', ')}.` : 'Demo data already present; nothing changed.');
   console.log(`Database: ${config.databaseFile}`);
