@@ -4,7 +4,9 @@ import { fileURLToPath } from 'node:url';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { browserLaunch } from './browser-launch.js';
+import { pageOpen } from './page-setup.js';
 import { serverStart, type RunningServer } from './server-start.js';
+import { passwordSignIn } from './sign-in.js';
 
 // The invented demo analyst of the fictional Larchloaf chain (apps/server/src/seed/demo-seed.ts).
 const ANALYST = { email: 'analyst@larchloaf.example', password: 'larchloaf-demo-2027' };
@@ -28,8 +30,7 @@ describe('the analyst’s day in a real browser', () => {
     mkdirSync(artifacts, { recursive: true });
     server = await serverStart({ googleEmail: 'nobody@larchloaf.example', googleName: 'Nobody', demoSeed: true });
     context = await browserLaunch();
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    page = await pageOpen(context, pageErrors);
   });
 
   afterAll(async () => {
@@ -38,11 +39,7 @@ describe('the analyst’s day in a real browser', () => {
   });
 
   it('signs in as the demo analyst and opens the demo study on the customers step', async () => {
-    await page.goto(`${server.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(ANALYST.email);
-    await page.getByLabel('Password').fill(ANALYST.password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: 'Workspaces', exact: true }).waitFor();
+    await passwordSignIn(page, server.baseUrl, ANALYST);
     await page.getByRole('link', { name: new RegExp(WORKSPACE) }).click();
     await page.getByRole('heading', { name: '1 · Customers' }).waitFor();
     await page.getByText('up to 200 MB').waitFor();

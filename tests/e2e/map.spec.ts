@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { browserLaunch } from './browser-launch.js';
+import { pageOpen } from './page-setup.js';
 import { pngPixels } from './png-pixels.js';
 import { serverStart, type RunningServer } from './server-start.js';
 
@@ -128,9 +129,7 @@ describe('the demand surface map in a real browser', () => {
 
     context = await browserLaunch();
     await context.addCookies([...api.cookies].map(([name, value]) => ({ name, value, url: server.baseUrl })));
-    page = context.pages()[0] ?? (await context.newPage());
-    page.setDefaultTimeout(60_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    page = await pageOpen(context, pageErrors, { defaultTimeout: 60_000 });
     page.on('console', (message) => {
       if (message.type() === 'error') consoleErrors.push(message.text().slice(0, 300));
     });

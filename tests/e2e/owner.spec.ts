@@ -5,7 +5,9 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { browserLaunch } from './browser-launch.js';
 import { freePort } from './free-port.js';
+import { pageOpen } from './page-setup.js';
 import { serverStart, type RunningServer } from './server-start.js';
+import { passwordSignIn } from './sign-in.js';
 
 // The seeded demo people of the invented Larchloaf chain (apps/server/src/seed/demo-seed.ts).
 const OWNER = { email: 'owner@larchloaf.example', password: 'larchloaf-demo-2027', name: 'Maren Larchwood' };
@@ -62,8 +64,7 @@ describe('the owner’s screens in a real browser', () => {
       },
     });
     context = await browserLaunch();
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    page = await pageOpen(context, pageErrors);
   });
 
   afterAll(async () => {
@@ -72,12 +73,7 @@ describe('the owner’s screens in a real browser', () => {
   });
 
   it('signs the demo owner in and shows billing with the demo credits', async () => {
-    await page.goto(`${server.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(OWNER.email);
-    await page.getByLabel('Password').fill(OWNER.password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    // Home sends the owner on to the organization's workspaces; navigate only after that redirect.
-    await page.getByRole('heading', { name: 'Workspaces', exact: true }).waitFor();
+    await passwordSignIn(page, server.baseUrl, OWNER);
     await page.getByRole('link', { name: 'Billing' }).click();
     await page.getByRole('heading', { name: 'Billing', level: 1 }).waitFor();
     await expect.poll(() => balance().textContent()).toBe('500');

@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { browserLaunch } from './browser-launch.js';
+import { pageOpen } from './page-setup.js';
 import { serverStart, type RunningServer } from './server-start.js';
 
 // Invented people of the fictional Larchloaf chain; nothing here is real.
@@ -24,9 +25,7 @@ describe('the platform in a real browser', () => {
     mkdirSync(artifacts, { recursive: true });
     server = await serverStart({ googleEmail: GOOGLE.email, googleName: GOOGLE.name });
     context = await browserLaunch();
-    page = context.pages()[0] ?? (await context.newPage());
-    page.setDefaultTimeout(60_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    page = await pageOpen(context, pageErrors, { defaultTimeout: 60_000 });
   });
 
   afterAll(async () => {
