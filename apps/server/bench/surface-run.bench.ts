@@ -14,26 +14,16 @@ import { creditsGrant } from '../src/modules/billing/credits.service.js';
 import { CustomerFileSchema } from '../src/modules/customer-file/customer-file.entity.js';
 import { CustomerPointChunkSchema } from '../src/modules/customer-file/customer-point-chunk.entity.js';
 import { customerPointsPack } from '../src/modules/customer-file/customer-points.js';
+import { QUILLPORT_CLUSTERS, uniformSeeded } from '../test/surface-fixtures.js';
 
 const sizesArg = process.argv.indexOf('--sizes');
 const SIZES = sizesArg > 0 ? process.argv[sizesArg + 1].split(',').map(Number) : [100_000, 1_000_000];
 
 /** Three neighbourhood clusters and a thin background around lon −38.5, lat 44.5 (Mulberry32, seeded). */
 function demoPoints(n: number) {
-  let s = 20261202;
-  const rand = (): number => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const rand = uniformSeeded(20261202);
   const normal = (): number => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
-  const clusters = [
-    { e: 0, n: 0, sd: 1.2 },
-    { e: 3.5, n: 1.5, sd: 0.6 },
-    { e: -2.5, n: -2, sd: 1.5 },
-  ];
+  const clusters = QUILLPORT_CLUSTERS;
   const mLat = 111_320;
   const mLon = mLat * Math.cos((44.5 * Math.PI) / 180);
   const lon = new Float64Array(n);

@@ -10,6 +10,31 @@ import { surfaceParamsSchema } from '../src/modules/surface/surface.schemas.js';
 /** Centre of the invented city of Quillport (open sea): lon −38.5°, lat 44.5°. */
 export const QUILLPORT = { lon: -38.5, lat: 44.5 };
 
+/** Three invented neighbourhood clusters of Quillport: centre east/north of the city centre and sd, in km. */
+export const QUILLPORT_CLUSTERS: readonly { e: number; n: number; sd: number }[] = [
+  { e: 0, n: 0, sd: 1.2 },
+  { e: 3.5, n: 1.5, sd: 0.6 },
+  { e: -2.5, n: -2, sd: 1.5 },
+];
+
+/**
+ * Seeded uniforms on [0, 1) from Mulberry32 (public-domain PRNG); the same seed gives the same stream.
+ * @param seed integer seed (taken as unsigned 32-bit)
+ * @returns the next uniform on each call
+ * @example
+ * const rand = uniformSeeded(7); const u = rand();
+ */
+export function uniformSeeded(seed: number): () => number {
+  let s = seed >>> 0;
+  return (): number => {
+    s = (s + 0x6d2b79f5) >>> 0;
+    let t = s;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
 /**
  * Seeded, clustered, invented customers around Quillport: three neighbourhood clusters (sd 0.6–1.5 km)
  * and a thin background, weights 1–3 (visits).
@@ -20,21 +45,9 @@ export const QUILLPORT = { lon: -38.5, lat: 44.5 };
  * const pts = demoPoints(2000);
  */
 export function demoPoints(n: number, seed = 7): { lon: Float64Array; lat: Float64Array; w: Float64Array; count: number } {
-  let s = seed >>> 0;
-  const rand = (): number => {
-    // Mulberry32 (public-domain PRNG).
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const rand = uniformSeeded(seed);
   const normal = (): number => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
-  const clusters = [
-    { e: 0, n: 0, sd: 1.2 },
-    { e: 3.5, n: 1.5, sd: 0.6 },
-    { e: -2.5, n: -2, sd: 1.5 },
-  ];
+  const clusters = QUILLPORT_CLUSTERS;
   const mPerDegLat = 111_320;
   const mPerDegLon = mPerDegLat * Math.cos((QUILLPORT.lat * Math.PI) / 180);
   const lon = new Float64Array(n);
