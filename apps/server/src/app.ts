@@ -30,6 +30,7 @@ import { invitationOrgRoutes, invitationPublicRoutes } from './modules/invitatio
 import { SqliteSessionStore } from './modules/session/session-store.js';
 import { meRoutes } from './modules/user/user.routes.js';
 import { surfaceRoutes } from './modules/surface/surface.routes.js';
+import { siteRoutes } from './modules/site/site.routes.js';
 import { webStaticMount } from './web-static.js';
 
 const { version } = createRequire(import.meta.url)('../package.json') as { version: string };
@@ -157,6 +158,7 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/customer-files', customerFiles.router);
   const surfaceRunner = new SurfaceRunner(orm, { concurrency: config.runnerConcurrency, log, mailer, publicUrl: config.publicUrl });
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/surfaces', surfaceRoutes(em, surfaceRunner));
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId/sites', siteRoutes(em));
   app.use('/api/organizations/:orgId/billing', billingRoutes({ em, stripe, billing: config.billing, publicUrl: config.publicUrl }));
   app.use('/api/organizations/:orgId/invitations', invitationOrgRoutes({ em, mailer, publicUrl: config.publicUrl }));
   app.use('/api/invitations', invitationPublicRoutes({ em }));

@@ -8,10 +8,11 @@ import { CustomerFileSchema } from './modules/customer-file/customer-file.entity
 import { CustomerPointChunkSchema } from './modules/customer-file/customer-point-chunk.entity.js';
 import { MembershipSchema } from './modules/organization/membership.entity.js';
 import { OrganizationSchema } from './modules/organization/organization.entity.js';
+import { SiteSchema } from './modules/site/site.entity.js';
 import { SessionSchema } from './modules/session/session.entity.js';
 import { SurfaceRasterSchema, SurfaceSchema } from './modules/surface/surface.entity.js';
 import { UserSchema } from './modules/user/user.entity.js';
 import { WorkspaceSchema } from './modules/workspace/workspace.entity.js';
 
 /** Every entity schema; new modules add theirs here (and a migration in src/migrations). */
-export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema];
+export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema, SiteSchema];

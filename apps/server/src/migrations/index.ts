@@ -3,6 +3,7 @@ import { Migration20261201000000Initial } from './2026-12-01-initial.js';
 import { Migration20261202000000Billing } from './2026-12-02-billing.js';
 import { Migration20261202000000CustomerFiles } from './2026-12-02-customer-files.js';
 import { Migration20261202000100Surfaces } from './2026-12-02-surfaces.js';
+import { Migration20261202000200Sites } from './2026-12-02-sites.js';
 
 /** Checked-in migrations in order; listed explicitly so built and source runs find the same set. */
 export const migrationsList: MigrationObject[] = [
@@ -10,4 +11,5 @@ export const migrationsList: MigrationObject[] = [
   { name: '2026-12-02-customer-files', class: Migration20261202000000CustomerFiles },
   { name: '2026-12-02-billing', class: Migration20261202000000Billing },
   { name: '2026-12-02-surfaces', class: Migration20261202000100Surfaces },
+  { name: '2026-12-02-sites', class: Migration20261202000200Sites },
 ];

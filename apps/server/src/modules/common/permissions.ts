@@ -19,6 +19,9 @@ export const PERMISSIONS = {
   'customerPoints.read': ['owner', 'analyst'],
   'surface.read': ROLES,
   'surface.write': ['owner', 'analyst'],
+  // Executives read shortlists, not the sites list.
+  'site.read': ['owner', 'analyst', 'planner'],
+  'site.write': ['owner', 'planner'],
   'billing.manage': ['owner'],
   'invitation.manage': ['owner'],
   'members.manage': ['owner'],
