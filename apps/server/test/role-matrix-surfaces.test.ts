@@ -35,6 +35,8 @@ const MATRIX: RouteRow[] = [
   { method: 'GET', route: `${S}/:surfaceId/web-raster?maxSize=64`, allowed: ROLES_ALL, ok: 200 },
   { method: 'GET', route: `${S}/:surfaceId/value?lon=-38.5&lat=44.5`, allowed: ROLES_ALL, ok: 200 },
   { method: 'GET', route: `${S}/:surfaceId/contours`, allowed: ROLES_ALL, ok: 200 },
+  { method: 'GET', route: `${S}/:surfaceId/contours.geojson`, allowed: ROLES_ALL, ok: 200 },
+  { method: 'GET', route: `${S}/:surfaceId/export.tif`, allowed: ROLES_ALL, ok: 200 },
   { method: 'GET', route: `${S}/:surfaceId/difference/:surfaceId/web-raster?maxSize=64`, allowed: ROLES_ALL, ok: 200 },
 ];
 

@@ -7,6 +7,7 @@ import { inputParse } from '../common/validate.js';
 import { coreInputErrors } from './surface-errors.js';
 import { PRIVACY_MIN_BANDWIDTH_M } from './surface-plan.js';
 import type { Surface } from './surface.entity.js';
+import { exportFileName, surfaceExportAudit, surfaceGeotiff } from './surface-export.js';
 import { surfaceContours, surfaceDifferenceRaster, surfaceGridLoad, surfaceValueAt, surfaceWebRaster } from './surface-results.js';
 import { surfaceCancel, surfaceCreate, surfaceDelete, surfaceEstimate, surfaceList, surfaceLoad, surfaceRetry, surfaceScopeCheck, surfaceView, type SurfaceScope } from './surface.service.js';
 import { surfaceCreateSchema, valueQuerySchema, webRasterQuerySchema } from './surface.schemas.js';
@@ -50,7 +51,8 @@ function rasterSend(res: Response, r: { values: Float32Array; width: number; hei
 
 /**
  * `/api/organizations/:orgId/workspaces/:workspaceId/surfaces`: estimate, create, list, read,
- * cancel, retry, delete, and the results (web raster, value, contours, difference).
+ * cancel, retry, delete, the results (web raster, value, contours, difference) and the downloads
+ * (GeoTIFF, contour GeoJSON).
  * @param em entity manager
  * @param runner the process's runner (woken on enqueue and cancel)
  * @returns the router (mounted with the parent's params)
@@ -116,6 +118,32 @@ export function surfaceRoutes(em: EntityManager, runner: { wake(): void }): Rout
   router.get('/:surfaceId/contours', read, async (req, res) => {
     executiveBandwidthCheck(req, await surfaceLoad(em, scopeOf(req), String(req.params.surfaceId)));
     res.type('application/geo+json').json(await surfaceContours(em, scopeOf(req), String(req.params.surfaceId)));
+  });
+
+  router.get('/:surfaceId/export.tif', read, async (req, res) => {
+    const g = await surfaceGridLoad(em, scopeOf(req), String(req.params.surfaceId));
+    executiveBandwidthCheck(req, g.surface);
+    const bytes = coreInputErrors(() => surfaceGeotiff(g));
+    await surfaceExportAudit(em, scopeOf(req), sessionUser(req), g, 'geotiff');
+    res.set({
+      'Content-Type': 'image/tiff',
+      'Content-Disposition': `attachment; filename="${exportFileName(g.surface.name, 'tif')}"`,
+      'Cache-Control': 'no-store',
+    });
+    res.send(Buffer.from(bytes));
+  });
+
+  router.get('/:surfaceId/contours.geojson', read, async (req, res) => {
+    const surface = await surfaceLoad(em, scopeOf(req), String(req.params.surfaceId));
+    executiveBandwidthCheck(req, surface);
+    const fc = await surfaceContours(em, scopeOf(req), surface.id);
+    await surfaceExportAudit(em, scopeOf(req), sessionUser(req), { surface }, 'contours');
+    res.set({
+      'Content-Type': 'application/geo+json',
+      'Content-Disposition': `attachment; filename="${exportFileName(surface.name, 'geojson')}"`,
+      'Cache-Control': 'no-store',
+    });
+    res.send(JSON.stringify(fc));
   });
 
   router.get('/:surfaceId/difference/:otherId/web-raster', read, async (req, res) => {
