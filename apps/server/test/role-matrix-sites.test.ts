@@ -10,7 +10,7 @@ const READERS = ['owner', 'analyst', 'planner'] as const;
 const WRITERS = ['owner', 'planner'] as const;
 
 interface RouteRow {
-  method: 'GET' | 'POST' | 'PATCH' | 'DELETE';
+  method: 'GET' | 'POST' | 'PATCH' | 'DELETE' | 'UPLOAD';
   /** `:orgId`/`:workspaceId` of org A; `:siteId` a fresh site for every call. */
   route: string;
   body?: object;
@@ -21,11 +21,14 @@ interface RouteRow {
 const S = '/api/organizations/:orgId/workspaces/:workspaceId/sites';
 const SITE = { kind: 'candidate', name: 'Quay corner', lon: -38.51, lat: 44.52, attractiveness: 120, attractivenessLabel: 'sales floor m²' };
 
+const CSV = 'name,kind,lon,lat,attractiveness\nQuay corner,candidate,-38.51,44.52,120\n';
+
 /** The site rows of THE ROLE MATRIX (PERMISSIONS 'site.read' = owner, analyst, planner; 'site.write' = owner, planner). */
 const MATRIX: RouteRow[] = [
   { method: 'GET', route: S, allowed: READERS, ok: 200 },
   { method: 'GET', route: `${S}?kind=own`, allowed: READERS, ok: 200 },
   { method: 'POST', route: S, body: SITE, allowed: WRITERS, ok: 201 },
+  { method: 'UPLOAD', route: `${S}/import`, allowed: WRITERS, ok: 201 },
   { method: 'PATCH', route: `${S}/:siteId`, body: { lon: -38.5, lat: 44.53 }, allowed: WRITERS, ok: 200 },
   { method: 'DELETE', route: `${S}/:siteId`, allowed: WRITERS, ok: 204 },
 ];
@@ -74,7 +77,15 @@ describe('role matrix: sites', () => {
         const path = await pathOf(row);
         const c = clients[caller];
         const res =
-          row.method === 'GET' ? await c.get(path) : row.method === 'POST' ? await c.post(path, row.body) : row.method === 'PATCH' ? await c.patch(path, row.body) : await c.del(path);
+          row.method === 'GET'
+            ? await c.get(path)
+            : row.method === 'POST'
+              ? await c.post(path, row.body)
+              : row.method === 'PATCH'
+                ? await c.patch(path, row.body)
+                : row.method === 'UPLOAD'
+                  ? await c.agent.post(path).set('x-csrf-token', c.token).attach('file', Buffer.from(CSV), 'sites.csv')
+                  : await c.del(path);
         actual[caller] = res.status;
         expected[caller] = expectedStatus(row, caller);
         if (res.status >= 400) expect(res.body.error?.code, `${caller}: error body`).toBeTypeOf('string');

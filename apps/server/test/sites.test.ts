@@ -117,3 +117,42 @@ describe('sites', () => {
     expect(rows[0].n).toBe(0);
   });
 });
+
+describe('sites CSV import', () => {
+  let ds: DemandscapeApp;
+  let owner: TestClient;
+  let orgId: string;
+  let base: string;
+  beforeAll(async () => {
+    ds = await testAppCreate();
+    ({ client: owner } = await testUserSignedIn(ds, 'owner@sites-import.example', 'Maren Larchwood'));
+    orgId = (await owner.post('/api/organizations', { name: 'Larchloaf' }).expect(201)).body.organization.id;
+    const wsId = (await owner.post(`/api/organizations/${orgId}/workspaces`, { name: 'Quillport north' }).expect(201)).body.workspace.id;
+    base = `/api/organizations/${orgId}/workspaces/${wsId}/sites`;
+  });
+  afterAll(() => ds.close());
+
+  const upload = (csv: string) => owner.agent.post(`${base}/import`).set('x-csrf-token', owner.token).attach('file', Buffer.from(csv), 'sites.csv');
+
+  it('imports every row of a good file', async () => {
+    const res = await upload('name,kind,lon,lat,attractiveness,notes\nQuay corner,candidate,-38.51,44.52,120,corner plot\nHarbour Row,own,-38.5,44.5,180,\n').expect(201);
+    expect(res.body).toEqual({ imported: 2 });
+    const sites = (await owner.get(base).expect(200)).body.sites;
+    expect(sites.map((s: { name: string; kind: string }) => `${s.kind}:${s.name}`)).toEqual(['candidate:Quay corner', 'own:Harbour Row']);
+    const events = (await owner.get(`/api/organizations/${orgId}/audit-events?action=site.import`).expect(200)).body.events;
+    expect(events[0].details).toEqual({ count: 2 });
+  });
+
+  it('imports nothing when any row is bad and lists each row error', async () => {
+    const before = (await owner.get(base).expect(200)).body.sites.length;
+    const res = await upload('name,kind,lon,lat,attractiveness\nFine,own,-38.5,44.5,10\nBad,own,-38.5,144.5,10\n').expect(400);
+    expect(res.body.error).toMatchObject({ code: 'SITE_ROWS_INVALID', rowErrors: [{ row: 3, field: 'lat', message: expect.stringMatching(/between -90 and 90/) }] });
+    expect(res.body.error.message).toMatch(/^1 row of the file has errors; nothing was imported/);
+    expect((await owner.get(base).expect(200)).body.sites.length).toBe(before);
+  });
+
+  it('asks for the file when none is sent', async () => {
+    const res = await owner.post(`${base}/import`, {}).expect(400);
+    expect(res.body.error).toMatchObject({ field: 'file', message: expect.stringMatching(/multipart\/form-data in the field "file"/) });
+  });
+});

@@ -4,6 +4,7 @@ import { requireMembership, sessionUser } from '../common/guards.js';
 import { PERMISSIONS } from '../common/permissions.js';
 import { inputParse } from '../common/validate.js';
 import { siteCreateSchema, siteListQuerySchema, siteUpdateSchema } from './site.schemas.js';
+import { siteCsvReceive, siteImport } from './site-import.js';
 import { siteCreate, siteDelete, siteList, siteUpdate, type SiteScope } from './site.service.js';
 
 function scopeOf(req: Request): SiteScope {
@@ -11,7 +12,8 @@ function scopeOf(req: Request): SiteScope {
 }
 
 /**
- * `/api/organizations/:orgId/workspaces/:workspaceId/sites`: list (filter by kind), create, edit/move, delete.
+ * `/api/organizations/:orgId/workspaces/:workspaceId/sites`: list (filter by kind), create, CSV import
+ * (all or nothing), edit/move, delete.
  * @param em - entity manager
  * @returns the router (mounted with the parent's `:orgId` and `:workspaceId`)
  * @example
@@ -28,6 +30,10 @@ export function siteRoutes(em: EntityManager): Router {
   router.post('/', requireMembership(em, PERMISSIONS['site.write']), async (req, res) => {
     const input = inputParse(siteCreateSchema, req.body);
     res.status(201).json({ site: await siteCreate(em, scopeOf(req), sessionUser(req), input) });
+  });
+
+  router.post('/import', requireMembership(em, PERMISSIONS['site.write']), siteCsvReceive(), async (req, res) => {
+    res.status(201).json(await siteImport(em, scopeOf(req), sessionUser(req), req.file!.buffer));
   });
 
   router.patch('/:siteId', requireMembership(em, PERMISSIONS['site.write']), async (req, res) => {
