@@ -57,3 +57,4 @@ export * from './scoring/kendall-tau.js';
 export * from './scoring/kde-binned-multi-bandwidth.js';
 export * from './scoring/rank-stability.js';
 export * from './cli/demo-customers.js';
+export * from './points/points-extent.js';

@@ -1,5 +1,6 @@
 import { CoreError } from '../errors.js';
 import type { GridSpec, PlanarPoints } from '../types.js';
+import { pointsExtent } from '../points/points-extent.js';
 import { gridFromExtent } from './grid-from-extent.js';
 import type { GridOptions } from './grid-size-limit.js';
 
@@ -21,21 +22,9 @@ export function gridFromPoints(points: PlanarPoints, cellSize: number, padding: 
   if (typeof padding !== 'number' || !Number.isFinite(padding) || padding < 0) {
     throw new CoreError('INVALID_ARGUMENT', `padding must be a number of metres ≥ 0 (got ${String(padding)})`, 'padding');
   }
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (let i = 0; i < points.x.length; i++) {
-    if (!(points.w[i] > 0)) continue;
-    const x = points.x[i];
-    const y = points.y[i];
-    if (x < minX) minX = x;
-    if (x > maxX) maxX = x;
-    if (y < minY) minY = y;
-    if (y > maxY) maxY = y;
-  }
-  if (minX === Infinity) {
+  const extent = pointsExtent(points, padding);
+  if (!extent) {
     throw new CoreError('ZERO_TOTAL_WEIGHT', 'every point has zero weight, so there is no demand to place a grid around', 'points');
   }
-  return gridFromExtent({ minX: minX - padding, minY: minY - padding, maxX: maxX + padding, maxY: maxY + padding }, cellSize, options);
+  return gridFromExtent(extent, cellSize, options);
 }

@@ -1,4 +1,5 @@
 import { bandwidthByRule } from '../bandwidth/bandwidth-by-rule.js';
+import { pointsExtent } from '../points/points-extent.js';
 import type { BandwidthRule } from '../bandwidth/bandwidth-result.js';
 import { CoreError } from '../errors.js';
 import { gridCellSizeSuggest } from '../grid/grid-cell-size-suggest.js';
@@ -99,7 +100,7 @@ export function densityFromPlanar(points: PlanarPoints, options: DensityPipeline
     cellSize = { value: options.cellSize, explanation: `${formatMetres(options.cellSize)}, set by hand` };
   } else {
     const pad = kernelReach(kernel, h);
-    const extent = options.extent ?? paddedExtent(points, pad);
+    const extent = options.extent ?? pointsExtent(points, pad);
     cellSize = gridCellSizeSuggest(kernel, h, extent, gridOptions);
   }
   const grid = options.extent
@@ -113,21 +114,4 @@ export function densityFromPlanar(points: PlanarPoints, options: DensityPipeline
     onProgress: options.onProgress,
   });
   return { grid, surface, bandwidth, cellSize };
-}
-
-function paddedExtent(points: PlanarPoints, pad: number): Extent | undefined {
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (let i = 0; i < points.x.length; i++) {
-    if (!(points.w[i] > 0)) continue;
-    minX = Math.min(minX, points.x[i]);
-    maxX = Math.max(maxX, points.x[i]);
-    minY = Math.min(minY, points.y[i]);
-    maxY = Math.max(maxY, points.y[i]);
-  }
-  // No positive weight: let gridFromPoints report it with its own message.
-  if (minX === Infinity) return undefined;
-  return { minX: minX - pad, minY: minY - pad, maxX: maxX + pad, maxY: maxY + pad };
 }

@@ -8,6 +8,7 @@ import {
   kernelBandwidthConvert,
   kernelByName,
   kernelReach,
+  pointsExtent,
   kernelSd,
   pointsFromLonLat,
   pointsProject,
@@ -16,7 +17,6 @@ import {
   surfaceCreditCost,
   CREDIT_COST_FORMULA,
   type BandwidthRule,
-  type Extent,
   type GridSpec,
   type KernelName,
   type PlanarPoints,
@@ -58,21 +58,6 @@ function seconds(start: number): number {
 function polygonsPlanar(geometry: Extract<SurfaceParams['studyArea'], { type: 'polygon' }>['geometry'], converter: ProjectionConverter): PlanarPolygon[] {
   const polygons = geometry.type === 'Polygon' ? [geometry.coordinates] : geometry.coordinates;
   return polygons.map((rings) => rings.map((r) => r.map(([lon, lat]) => converter.forwardPoint(lon, lat))));
-}
-
-function pointsExtent(points: PlanarPoints, pad: number): Extent {
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (let i = 0; i < points.x.length; i++) {
-    if (!(points.w[i] > 0)) continue;
-    minX = Math.min(minX, points.x[i]);
-    maxX = Math.max(maxX, points.x[i]);
-    minY = Math.min(minY, points.y[i]);
-    maxY = Math.max(maxY, points.y[i]);
-  }
-  return { minX: minX - pad, minY: minY - pad, maxX: maxX + pad, maxY: maxY + pad };
 }
 
 /** A plan without the typed arrays and functions: what crosses threads and what the estimate shows. */
