@@ -19,6 +19,8 @@ const permissionRoles = {
   'customerFile:write': ['owner', 'analyst'],
   /** Build demand surfaces (spends credits), cancel, retry and delete runs. */
   'surface:write': ['owner', 'analyst'],
+  /** Save scoring settings, score sites, check rank stability, score candidate sets, delete scoring runs. */
+  'scoring:write': ['owner', 'planner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionRoles;
