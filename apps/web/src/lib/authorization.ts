@@ -21,6 +21,10 @@ const permissionRoles = {
   'surface:write': ['owner', 'analyst'],
   /** Save scoring settings, score sites, check rank stability, score candidate sets, delete scoring runs. */
   'scoring:write': ['owner', 'planner'],
+  /** See the sites of a workspace (executives read shortlists instead; the server refuses them the sites list). */
+  'site:read': ['owner', 'analyst', 'planner'],
+  /** Add, import, edit, move and delete candidate sites, own stores and competitors. */
+  'site:write': ['owner', 'planner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionRoles;
