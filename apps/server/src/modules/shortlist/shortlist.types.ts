@@ -36,6 +36,8 @@ export interface ShortlistVersionJson {
   items: ShortlistItemJson[];
   ownStores: Array<{ siteId: string; name: string; lon: number; lat: number }>;
   competitors: Array<{ siteId: string; name: string; lon: number; lat: number }>;
+  /** The run's surface (bandwidth, kernel, cell size, projection) for reports; absent in versions saved without it. */
+  surface?: { bandwidthM: number; kernel: string; cellSizeM: number; projection: string };
 }
 
 export interface ShortlistSummaryJson {
