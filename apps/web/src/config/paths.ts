@@ -33,6 +33,12 @@ export const paths = {
     members: { path: 'members', getHref: (orgId: string) => `/orgs/${orgId}/members` },
     auditLog: { path: 'audit-log', getHref: (orgId: string) => `/orgs/${orgId}/audit-log` },
     billing: { path: 'billing', getHref: (orgId: string) => `/orgs/${orgId}/billing` },
+    shortlists: { path: 'shortlists', getHref: (orgId: string) => `/orgs/${orgId}/shortlists` },
+    shortlist: {
+      path: 'shortlists/:shortlistId',
+      getHref: (orgId: string, shortlistId: string, version?: number | null) =>
+        `/orgs/${orgId}/shortlists/${shortlistId}${version ? `?version=${version}` : ''}`,
+    },
   },
 } as const;
 

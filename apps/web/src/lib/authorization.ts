@@ -25,6 +25,10 @@ const permissionRoles = {
   'site:read': ['owner', 'analyst', 'planner'],
   /** Add, import, edit, move and delete candidate sites, own stores and competitors. */
   'site:write': ['owner', 'planner'],
+  /** Read shortlists and their exports (every role; the executive's page). */
+  'shortlist:read': ['owner', 'analyst', 'planner', 'executive'],
+  /** Build shortlists, save versions, rename, delete and share them with executives. */
+  'shortlist:write': ['owner', 'planner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionRoles;
