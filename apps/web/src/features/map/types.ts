@@ -18,3 +18,15 @@ export type MapCustomerFile = { id: string; name: string; weightKind: WeightKind
 
 /** Where the map's requests go: the organization and workspace of the study. */
 export type MapScope = { orgId: string; workspaceId: string };
+
+/** The three kinds of site a study places on the map. */
+export type MapSiteKind = 'candidate' | 'own' | 'competitor';
+
+/**
+ * A site as the map draws it. `label` replaces the name beside the symbol when given (e.g. a rank
+ * such as "#2" from the scoring step).
+ */
+export type MapSite = { id: string; name: string; kind: MapSiteKind; lon: number; lat: number; label?: string };
+
+/** A position picked or dragged on the map, WGS84 degrees. */
+export type MapLonLat = { lon: number; lat: number };

@@ -5,6 +5,7 @@ import { useEffect, useRef, useState } from 'react';
 import { basemapLabels } from '../lib/basemap-style';
 import { contourLayersSync, customerLayerSync, mapLayerIds, surfaceLayerSync } from '../lib/map-layers';
 import { mapInstanceCreate, markerAdd } from '../lib/map-instance';
+import { useSitesOnMap, type SitesOnMap } from '../hooks/use-sites-on-map';
 
 type Corners = [[number, number], [number, number], [number, number], [number, number]];
 
@@ -31,11 +32,11 @@ export type MapCanvasProps = {
   /** Receives the map once its style has loaded, and null when it goes (camera sync in side-by-side). */
   onMapReady?: (map: MapLibreMap | null) => void;
   label: string;
-};
+} & SitesOnMap;
 
 /**
  * The one component that owns a MapLibre instance: creates it, listens for its `error` event, keeps
- * the surface, contour and customer layers in step with the props, and removes it on unmount.
+ * the surface, contour, customer and site layers in step with the props, and removes it on unmount.
  * @param props style, layers and callbacks
  * @returns the map element (with an error message above it when the map reports one)
  * @example <MapCanvas style={demoBasemapStyle(basemap)} initialView={{ center: [-38.5, 44.5], zoom: 11 }} label="Demand surface map" />
@@ -113,6 +114,9 @@ export function MapCanvas(props: MapCanvasProps) {
     if (map) customerLayerSync(map, props.customerBins ?? null, props.customerColours ?? []);
   }, [map, props.customerBins, props.customerColours]);
 
+  // Declared after the other layers so the sites are raised above whatever they add.
+  useSitesOnMap(map, props, [props.surfaceImage, props.contours, props.customerBins]);
+
   return (
     <div className="relative h-full min-h-80">
       {error ? (
@@ -124,6 +128,11 @@ export function MapCanvas(props: MapCanvasProps) {
       ) : null}
       {/* MapLibre makes its container position: relative, so it is sized by height, not by inset. */}
       <div ref={container} role="region" aria-label={props.label} className="h-full w-full overflow-hidden rounded-panel border border-line" />
+      {props.onMapClickAdd ? (
+        <p className="pointer-events-none absolute bottom-2 left-2 z-10 rounded-control bg-surface/95 px-2.5 py-1.5 text-xs font-medium text-ink shadow-panel">
+          Click the map where the new site goes.
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -12,22 +12,30 @@ import { useSurfaceWebRaster } from '../api/get-surface-web-raster';
 import { useRasterImage } from '../hooks/use-raster-image';
 import { useSyncedCameras } from '../hooks/use-synced-cameras';
 import { demoBasemapStyle } from '../lib/basemap-style';
+import type { SitesOnMap } from '../hooks/use-sites-on-map';
 import type { MapCustomerFile, MapScope, MapSurface } from '../types';
 import { densityUnitLabel } from '../utils/density-unit';
 import { rasterValueAt } from '../utils/web-raster';
 import { CompareControls, type CompareMode } from './compare-controls';
 import { CustomerLegend, customerColourStops } from './customer-legend';
 import { HoverReadout } from './hover-readout';
+import { BasemapSiteMap, DEMO_VIEW } from './basemap-site-map';
 import { MapCanvas } from './map-canvas';
+import { SiteLegend } from './site-legend';
 import { SurfaceLegend } from './surface-legend';
 
-/** Quillport (the demo city, open sea) when there is nothing to fit yet. */
-const DEMO_VIEW = { center: [-38.5, 44.5] as [number, number], zoom: 10.5 };
+/**
+ * Sites on the map (all optional): `sites` draws them with a legend; `selectedSiteId` rings one;
+ * `onSiteSelect(id)` fires on a click on a site; `onMapClickAdd({ lon, lat })`, when set, turns a
+ * click on empty map into a position (crosshair cursor, hint); `onSiteMove(id, { lon, lat })`, when
+ * set, makes sites draggable and fires once on release.
+ */
+export type SurfaceMapSiteProps = SitesOnMap;
 
-export type SurfaceMapProps = {
+type SurfaceMapOwnProps = {
   scope: MapScope;
-  /** The surface to show (only a succeeded one has results). */
-  surface: MapSurface;
+  /** The surface to show (only a succeeded one has results); null shows the basemap with the sites only. */
+  surface: MapSurface | null;
   /** The surface's customer file (legend words; the customer bins toggle). */
   customerFile: MapCustomerFile | null;
   /** The viewer's role: aggregated customers only for owners and analysts. */
@@ -36,15 +44,31 @@ export type SurfaceMapProps = {
   compareCandidates?: MapSurface[];
 };
 
+export type SurfaceMapProps = SurfaceMapOwnProps & SurfaceMapSiteProps;
+
 /**
  * A demand surface on the map: the offline demo basemap (or the production style), the coloured
  * surface with opacity, legend in real units, contour switches, the value under the cursor, the
- * aggregated customer view for owners and analysts, and a comparison with a second surface.
- * @param props the study scope, the surface, its customer file, the viewer's role, surfaces to compare with
+ * aggregated customer view for owners and analysts, a comparison with a second surface, and the
+ * study's sites (see `SurfaceMapSiteProps`). Without a surface, the basemap and the sites only.
+ * @param props the study scope, the surface, its customer file, the viewer's role, surfaces to compare with, sites
  * @returns the map panel
- * @example <SurfaceMap scope={{ orgId, workspaceId }} surface={surface} customerFile={file} role={role} compareCandidates={surfaces} />
+ * @example <SurfaceMap scope={{ orgId, workspaceId }} surface={surface} customerFile={file} role={role} compareCandidates={surfaces} sites={sites} onSiteSelect={select} />
  */
-export function SurfaceMap({ scope, surface, customerFile, role, compareCandidates = [] }: SurfaceMapProps) {
+export function SurfaceMap({ surface, ...props }: SurfaceMapProps) {
+  if (!surface) {
+    const { sites, selectedSiteId, onSiteSelect, onMapClickAdd, onSiteMove } = props;
+    return (
+      <BasemapSiteMap
+        note="No demand surface yet: the sites are shown on the basemap alone."
+        {...{ sites: sites ?? [], selectedSiteId, onSiteSelect, onMapClickAdd, onSiteMove }}
+      />
+    );
+  }
+  return <SurfaceMapWithSurface surface={surface} {...props} />;
+}
+
+function SurfaceMapWithSurface({ scope, surface, customerFile, role, compareCandidates = [], ...siteProps }: SurfaceMapProps & { surface: MapSurface }) {
   const styleUrl = env.VITE_BASEMAP_STYLE_URL;
   const basemap = useDemoBasemap(!styleUrl);
   const ready = surface.status === 'succeeded';
@@ -126,6 +150,7 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
             customerColours={customerColours}
             onZoom={setZoom}
             onMapReady={sideBySide ? cameras.leftReady : undefined}
+            {...siteProps}
           />
           <div className="pointer-events-none absolute top-2 right-2 max-w-[70%]">
             <HoverReadout value={hoverValue} unitText={unitText} signed={showDifference} />
@@ -133,7 +158,16 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
         </div>
         {sideBySide && other ? (
           <div className="relative h-full">
-            <MapCanvas key={`${other.id}-pair`} {...shared} label={`Demand surface ${other.name}`} surfaceImage={right.image} surfaceOpacity={opacity} onMapReady={cameras.rightReady} />
+            <MapCanvas
+              key={`${other.id}-pair`}
+              {...shared}
+              label={`Demand surface ${other.name}`}
+              surfaceImage={right.image}
+              surfaceOpacity={opacity}
+              onMapReady={cameras.rightReady}
+              sites={siteProps.sites}
+              selectedSiteId={siteProps.selectedSiteId}
+            />
             <div className="pointer-events-none absolute top-2 right-2 max-w-[70%]">
               <HoverReadout value={rightValue} unitText={densityUnitLabel(weightKind, other.params.unit, customerFile?.weightLabel)} />
             </div>
@@ -153,6 +187,7 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
           contourVisible={contourVisible}
           onContourToggle={(percent, visible) => setContourVisible((v) => ({ ...v, [percent]: visible }))}
         />
+        {siteProps.sites ? <SiteLegend sites={siteProps.sites} /> : null}
         {showCustomers && canSeeCustomers && bins.data ? (
           <CustomerLegend
             maxCount={customerColours[customerColours.length - 1][0]}

@@ -60,3 +60,17 @@ export function canvasFromRgba(rgba: Uint8ClampedArray, width: number, height: n
   context.putImageData(image, 0, 0);
   return canvas;
 }
+
+/**
+ * Places a site's name (or rank) under its symbol as an HTML label (no glyph files needed).
+ * @param element the label element
+ * @param lngLat the site's position
+ * @param map the map
+ * @param offsetY pixels below the point (clears the symbol)
+ * @returns `move` to follow a drag and `remove`
+ * @example const label = siteLabelAdd(span, [-38.5, 44.5], map, 13); label.move([-38.49, 44.5]);
+ */
+export function siteLabelAdd(element: HTMLElement, lngLat: [number, number], map: MapLibreMap, offsetY: number) {
+  const marker = new maplibregl.Marker({ element, anchor: 'top', offset: [0, offsetY] }).setLngLat(lngLat).addTo(map);
+  return { move: (next: [number, number]) => void marker.setLngLat(next), remove: () => void marker.remove() };
+}

@@ -8,6 +8,10 @@ export class FakeMap {
   handlers = new Map<string, Array<(event?: unknown) => void>>();
   zoom = 11;
   removed = false;
+  images = new Map<string, { image: { width: number; height: number; data: Uint8ClampedArray }; options?: unknown }>();
+  canvas = { style: { cursor: '' } };
+  /** What `queryRenderedFeatures` answers (tests set the sites under the pointer). */
+  featuresUnderPointer: Array<{ properties: Record<string, unknown> }> = [];
 
   constructor(style?: unknown) {
     // A style object's layers exist once it has loaded, as on the real map; a style URL brings none here.
@@ -16,8 +20,10 @@ export class FakeMap {
     }
   }
 
-  on(event: string, handler: (event?: unknown) => void) {
-    this.handlers.set(event, [...(this.handlers.get(event) ?? []), handler]);
+  /** `on(event, handler)` or, for events on one layer, `on(event, layerId, handler)` (kept as `event:layerId`). */
+  on(event: string, layerOrHandler: string | ((event?: unknown) => void), maybeHandler?: (event?: unknown) => void) {
+    const [key, handler] = typeof layerOrHandler === 'string' ? [`${event}:${layerOrHandler}`, maybeHandler!] : [event, layerOrHandler];
+    this.handlers.set(key, [...(this.handlers.get(key) ?? []), handler]);
     return this;
   }
   once(event: string, handler: (event?: unknown) => void) {
@@ -27,8 +33,9 @@ export class FakeMap {
     };
     return this.on(event, wrapped);
   }
-  off(event: string, handler: (event?: unknown) => void) {
-    this.handlers.set(event, (this.handlers.get(event) ?? []).filter((h) => h !== handler));
+  off(event: string, layerOrHandler: string | ((event?: unknown) => void), maybeHandler?: (event?: unknown) => void) {
+    const [key, handler] = typeof layerOrHandler === 'string' ? [`${event}:${layerOrHandler}`, maybeHandler!] : [event, layerOrHandler];
+    this.handlers.set(key, (this.handlers.get(key) ?? []).filter((h) => h !== handler));
     return this;
   }
   fire(event: string, payload?: unknown) {
@@ -64,6 +71,29 @@ export class FakeMap {
   }
   setLayoutProperty(id: string, key: string, value: unknown) {
     this.layers.get(id)!.layout[key] = value;
+  }
+  hasImage(id: string) {
+    return this.images.has(id);
+  }
+  addImage(id: string, image: { width: number; height: number; data: Uint8ClampedArray }, options?: unknown) {
+    if (this.images.has(id)) throw new Error(`An image named "${id}" already exists.`);
+    this.images.set(id, { image, options });
+  }
+  /** Moves a layer to the top (no `before`), as MapLibre does. */
+  moveLayer(id: string) {
+    const layer = this.layers.get(id);
+    if (!layer) throw new Error(`The layer "${id}" does not exist.`);
+    this.layers.delete(id);
+    this.layers.set(id, layer);
+  }
+  setFilter(id: string, filter: unknown) {
+    this.layers.get(id)!.spec = { ...this.layers.get(id)!.spec, filter };
+  }
+  queryRenderedFeatures() {
+    return this.featuresUnderPointer;
+  }
+  getCanvas() {
+    return this.canvas;
   }
   fitBounds() {}
   triggerRepaint() {}
