@@ -19,7 +19,7 @@ import { rasterValueAt } from '../utils/web-raster';
 import { CompareControls, type CompareMode } from './compare-controls';
 import { CustomerLegend, customerColourStops } from './customer-legend';
 import { HoverReadout } from './hover-readout';
-import { BasemapSiteMap, DEMO_VIEW } from './basemap-site-map';
+import { DEMO_VIEW } from './basemap-site-map';
 import { MapCanvas } from './map-canvas';
 import { SiteLegend } from './site-legend';
 import { SurfaceLegend } from './surface-legend';
@@ -34,8 +34,8 @@ export type SurfaceMapSiteProps = SitesOnMap;
 
 type SurfaceMapOwnProps = {
   scope: MapScope;
-  /** The surface to show (only a succeeded one has results); null shows the basemap with the sites only. */
-  surface: MapSurface | null;
+  /** The surface to show (only a succeeded one has results). Without one, use `BasemapSiteMap`. */
+  surface: MapSurface;
   /** The surface's customer file (legend words; the customer bins toggle). */
   customerFile: MapCustomerFile | null;
   /** The viewer's role: aggregated customers only for owners and analysts. */
@@ -50,25 +50,12 @@ export type SurfaceMapProps = SurfaceMapOwnProps & SurfaceMapSiteProps;
  * A demand surface on the map: the offline demo basemap (or the production style), the coloured
  * surface with opacity, legend in real units, contour switches, the value under the cursor, the
  * aggregated customer view for owners and analysts, a comparison with a second surface, and the
- * study's sites (see `SurfaceMapSiteProps`). Without a surface, the basemap and the sites only.
+ * study's sites (see `SurfaceMapSiteProps`). Without a surface, `BasemapSiteMap` shows the sites alone.
  * @param props the study scope, the surface, its customer file, the viewer's role, surfaces to compare with, sites
  * @returns the map panel
  * @example <SurfaceMap scope={{ orgId, workspaceId }} surface={surface} customerFile={file} role={role} compareCandidates={surfaces} sites={sites} onSiteSelect={select} />
  */
-export function SurfaceMap({ surface, ...props }: SurfaceMapProps) {
-  if (!surface) {
-    const { sites, selectedSiteId, onSiteSelect, onMapClickAdd, onSiteMove } = props;
-    return (
-      <BasemapSiteMap
-        note="No demand surface yet: the sites are shown on the basemap alone."
-        {...{ sites: sites ?? [], selectedSiteId, onSiteSelect, onMapClickAdd, onSiteMove }}
-      />
-    );
-  }
-  return <SurfaceMapWithSurface surface={surface} {...props} />;
-}
-
-function SurfaceMapWithSurface({ scope, surface, customerFile, role, compareCandidates = [], ...siteProps }: SurfaceMapProps & { surface: MapSurface }) {
+export function SurfaceMap({ scope, surface, customerFile, role, compareCandidates = [], ...siteProps }: SurfaceMapProps) {
   const styleUrl = env.VITE_BASEMAP_STYLE_URL;
   const basemap = useDemoBasemap(!styleUrl);
   const ready = surface.status === 'succeeded';

@@ -8,6 +8,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { server } from '../../../../testing/mocks/server';
 import { renderWithProviders } from '../../../../testing/test-utils';
 import type { MapSite, MapSurface } from '../../types';
+import { BasemapSiteMap } from '../basemap-site-map';
 import { SurfaceMap } from '../surface-map';
 import { FakeMap } from './fake-map';
 
@@ -160,8 +161,8 @@ describe('SurfaceMap with sites', () => {
     expect(onMapClickAdd).toHaveBeenCalledTimes(1);
   });
 
-  it('draws the basemap with the sites when there is no surface yet', async () => {
-    renderWithProviders(<SurfaceMap scope={scope} surface={null} customerFile={null} role="planner" sites={sites} />);
+  it('BasemapSiteMap draws the basemap with the sites when there is no surface yet', async () => {
+    renderWithProviders(<BasemapSiteMap note="No demand surface yet: the sites are shown on the basemap alone." sites={sites} />);
     const map = await sitesLayer();
     expect(screen.getByText('No demand surface yet: the sites are shown on the basemap alone.')).toBeInTheDocument();
     expect(screen.getByRole('region', { name: 'Map of the study’s sites' })).toBeInTheDocument();
