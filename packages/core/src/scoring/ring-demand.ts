@@ -34,6 +34,24 @@ export function ringRadiusFromMiles(miles: number): number {
  * ringDemand(surface, site.x, site.y, 3000);
  */
 export function ringDemand(surface: ScoringSurface, x: number, y: number, radius: number): number {
+  return ringDemandRows(surface, x, y, radius, 0, surface.spec.height);
+}
+
+/**
+ * The part of {@link ringDemand} that lies in grid rows rowStart ≤ j < rowEnd; the parts of
+ * disjoint row ranges add up to the whole ring (for splitting work across threads).
+ *
+ * @param surface λ̂ per km²
+ * @param x centre x in metres
+ * @param y centre y in metres
+ * @param radius ring radius in metres (> 0)
+ * @param rowStart first grid row
+ * @param rowEnd end row (exclusive)
+ * @returns demand of the ring within those rows
+ * @example
+ * ringDemandRows(surface, x, y, 3000, 0, 500) + ringDemandRows(surface, x, y, 3000, 500, 1000);
+ */
+export function ringDemandRows(surface: ScoringSurface, x: number, y: number, radius: number, rowStart: number, rowEnd: number): number {
   if (!(radius > 0) || !Number.isFinite(radius)) {
     throw new CoreError('INVALID_ARGUMENT', `ring radius must be a positive number of metres (got ${radius})`, 'radii');
   }
@@ -41,8 +59,8 @@ export function ringDemand(surface: ScoringSurface, x: number, y: number, radius
   const { originX, originY, cellSize, width, height } = spec;
   const i0 = Math.max(0, Math.floor((x - radius - originX) / cellSize));
   const i1 = Math.min(width - 1, Math.floor((x + radius - originX) / cellSize));
-  const j0 = Math.max(0, Math.floor((y - radius - originY) / cellSize));
-  const j1 = Math.min(height - 1, Math.floor((y + radius - originY) / cellSize));
+  const j0 = Math.max(0, rowStart, Math.floor((y - radius - originY) / cellSize));
+  const j1 = Math.min(height - 1, rowEnd - 1, Math.floor((y + radius - originY) / cellSize));
   const r2 = radius * radius;
   const cellArea = cellSize * cellSize;
   let sum = 0; // Σ λ̂ (per km²) × area (m²)

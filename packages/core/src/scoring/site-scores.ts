@@ -1,20 +1,12 @@
 import { CoreError, throwIfAborted } from '../errors.js';
-import { sitesValidate, type Site } from '../sites/site.js';
-import { huffCandidate, huffCandidateSet } from './huff-candidate.js';
-import { huffCandidatesAlone } from './huff-candidates-alone.js';
-import { huffBaseCaptured, huffGrid, type HuffGrid } from './huff-grid.js';
-import type { HuffOptions } from './huff-options.js';
+import type { Site } from '../sites/site.js';
+import { huffCandidateSet } from './huff-candidate.js';
+import { huffGrid, type HuffGrid } from './huff-grid.js';
 import { ringDemands, RING_RADII_DEFAULT_M, type RingDemand } from './ring-demand.js';
 import { scoringSurfaceValidate, type ScoringSurface } from './scoring-surface.js';
+import { ringRadiiChecked, siteScoresPart, sitesByKind, type SiteScoreOptions, type SiteScoresPart } from './site-scores-part.js';
 
-export interface SiteScoreOptions extends HuffOptions {
-  /** Ring radii in metres (default 1, 3, 5 km). */
-  radii?: readonly number[];
-  /** Split each candidate's cannibalization by own store (default true; one extra pass per own store). */
-  breakdown?: boolean;
-  signal?: AbortSignal;
-  onProgress?: (fraction: number) => void;
-}
+export type { SiteScoreOptions } from './site-scores-part.js';
 
 /** Demand taken from one own store. */
 export interface StoreLoss {
@@ -49,24 +41,6 @@ export interface SiteScores {
   beta: number;
 }
 
-function splitSites(sites: readonly Site[]): { candidates: Site[]; own: Site[]; competitors: Site[] } {
-  sitesValidate(sites);
-  return {
-    candidates: sites.filter((s) => s.kind === 'candidate'),
-    own: sites.filter((s) => s.kind === 'own'),
-    competitors: sites.filter((s) => s.kind === 'competitor'),
-  };
-}
-
-function radiiChecked(radii: readonly number[]): readonly number[] {
-  radii.forEach((r, k) => {
-    if (!(r > 0) || !Number.isFinite(r)) {
-      throw new CoreError('INVALID_ARGUMENT', `ring radius #${k + 1} must be a positive number of metres (got ${r})`, 'radii');
-    }
-  });
-  return radii;
-}
-
 function storeLosses(grid: HuffGrid, lost: Float64Array | undefined): StoreLoss[] {
   return lost ? grid.own.map((s, k) => ({ id: s.id, demand: lost[k] })) : [];
 }
@@ -85,35 +59,79 @@ function storeLosses(grid: HuffGrid, lost: Float64Array | undefined): StoreLoss[
  * const { candidates } = siteScores({ spec, values: surface.intensity }, sites, { beta: 2 });
  */
 export function siteScores(surface: ScoringSurface, sites: readonly Site[], options: SiteScoreOptions = {}): SiteScores {
-  scoringSurfaceValidate(surface);
-  const { candidates, own, competitors } = splitSites(sites);
-  const radii = radiiChecked(options.radii ?? RING_RADII_DEFAULT_M);
-  const grid = huffGrid(surface, own, competitors, options, options.signal);
-  const total = grid.cells.total;
-  const ownBase = huffBaseCaptured(grid, own);
-  const breakdown = options.breakdown ?? true;
-  const scratch = breakdown ? new Float64Array(grid.cells.demand.length) : undefined;
-  const batch = breakdown ? undefined : huffCandidatesAlone(grid, candidates, options.signal);
-  const scores = candidates.map((site, k) => {
-    throwIfAborted(options.signal);
-    const r = batch ? { captured: batch.captured[k], cannibalization: batch.cannibalization[k], cannibalizedFrom: undefined } : huffCandidate(grid, site, true, scratch);
-    options.onProgress?.((k + 1) / candidates.length);
-    return {
-      id: site.id,
-      captured: r.captured,
-      cannibalization: r.cannibalization,
-      cannibalizedFrom: storeLosses(grid, r.cannibalizedFrom),
-      netNew: r.captured - r.cannibalization,
-      shareOfTotal: total > 0 ? r.captured / total : 0,
-      rings: ringDemands(surface, site.x, site.y, radii),
-    };
-  });
+  const part = siteScoresPart(surface, sites, { ...options, rows: undefined });
+  return siteScoresFromParts(surface, sites, [part], options);
+}
+
+/**
+ * Joins the parts of {@link siteScoresPart} computed over row ranges that together cover every
+ * grid row exactly once (e.g. by two worker threads) into the scores siteScores returns.
+ *
+ * @param surface the surface the parts were computed on (only its grid size is read)
+ * @param sites the same sites as given to every part
+ * @param parts one part per row range, any order
+ * @param options the same radii as given to the parts (default 1, 3, 5 km)
+ * @returns totals, today's own demand and one score per candidate (input order)
+ * @example
+ * const scores = siteScoresFromParts(surface, sites, [partTop, partBottom]);
+ */
+export function siteScoresFromParts(
+  surface: ScoringSurface,
+  sites: readonly Site[],
+  parts: readonly SiteScoresPart[],
+  options: Pick<SiteScoreOptions, 'radii'> = {},
+): SiteScores {
+  const { candidates, own } = sitesByKind(sites);
+  const radii = ringRadiiChecked(options.radii ?? RING_RADII_DEFAULT_M);
+  const m = candidates.length;
+  const K = own.length;
+  const R = radii.length;
+  const sorted = [...(Array.isArray(parts) ? parts : [])].sort((p, q) => p.rows[0] - q.rows[0]);
+  let next = 0;
+  for (const p of sorted) {
+    if (p.rows[0] !== next) {
+      throw new CoreError('INVALID_ARGUMENT', `parts must cover grid rows 0–${surface.spec.height} once each; rows ${next} to ${p.rows[0]} are ${p.rows[0] > next ? 'missing' : 'covered twice'}`, 'parts');
+    }
+    next = p.rows[1];
+    if (p.captured.length !== m || p.ownToday.length !== K || p.rings.length !== m * R || (p.cannibalizedFrom !== null && p.cannibalizedFrom.length !== m * K)) {
+      throw new CoreError('INVALID_ARGUMENT', `the part for rows ${p.rows[0]}–${p.rows[1]} was computed for other sites or radii; score every part with the same sites and options`, 'parts');
+    }
+    if (p.alpha !== sorted[0].alpha || p.beta !== sorted[0].beta) {
+      throw new CoreError('INVALID_ARGUMENT', 'all parts must use the same α and β', 'parts');
+    }
+  }
+  if (sorted.length === 0 || next !== surface.spec.height) {
+    throw new CoreError('INVALID_ARGUMENT', `parts must cover grid rows 0–${surface.spec.height}; they end at row ${next}`, 'parts');
+  }
+  const breakdown = sorted.every((p) => p.cannibalizedFrom !== null);
+  const sum = (pick: (p: SiteScoresPart) => Float64Array | null, len: number): Float64Array => {
+    const out = new Float64Array(len);
+    for (const p of sorted) {
+      const v = pick(p);
+      if (v) for (let i = 0; i < len; i++) out[i] += v[i];
+    }
+    return out;
+  };
+  const total = sorted.reduce((s, p) => s + p.totalDemand, 0);
+  const captured = sum((p) => p.captured, m);
+  const cannibalization = sum((p) => p.cannibalization, m);
+  const lost = breakdown ? sum((p) => p.cannibalizedFrom, m * K) : null;
+  const rings = sum((p) => p.rings, m * R);
+  const ownToday = sum((p) => p.ownToday, K);
   return {
     totalDemand: total,
-    ownToday: own.map((s, k) => ({ id: s.id, demand: ownBase[k] })),
-    candidates: scores,
-    alpha: grid.alpha,
-    beta: grid.beta,
+    ownToday: own.map((s, k) => ({ id: s.id, demand: ownToday[k] })),
+    candidates: candidates.map((site, j) => ({
+      id: site.id,
+      captured: captured[j],
+      cannibalization: cannibalization[j],
+      cannibalizedFrom: lost ? own.map((s, k) => ({ id: s.id, demand: lost[j * K + k] })) : [],
+      netNew: captured[j] - cannibalization[j],
+      shareOfTotal: total > 0 ? captured[j] / total : 0,
+      rings: radii.map((radius, k) => ({ radius, demand: rings[j * R + k] })),
+    })),
+    alpha: sorted[0].alpha,
+    beta: sorted[0].beta,
   };
 }
 
@@ -149,8 +167,9 @@ export function siteSetScore(
   options: SiteScoreOptions = {},
 ): SiteSetScore {
   scoringSurfaceValidate(surface);
-  const { candidates, own, competitors } = splitSites(sites);
-  const radii = radiiChecked(options.radii ?? RING_RADII_DEFAULT_M);
+  const { candidates, own, competitors } = sitesByKind(sites);
+  const radii = ringRadiiChecked(options.radii ?? RING_RADII_DEFAULT_M);
+  throwIfAborted(options.signal);
   if (!Array.isArray(ids) || ids.length === 0) {
     throw new CoreError('INVALID_ARGUMENT', 'name at least one candidate id to open together', 'ids');
   }
