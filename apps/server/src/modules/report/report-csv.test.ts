@@ -21,7 +21,8 @@ describe('csvField', () => {
   });
 
   it('neutralises text a spreadsheet would run as a formula', () => {
-    for (const bad of ['=1+1', '+1', '-2+3', '@SUM(A1)', '\tx', '\rx']) expect(csvField(bad).replace(/^"/, '').startsWith("'")).toBe(true);
+    for (const bad of ['=1+1', '+1', '-2+3', '@SUM(A1)', '\tx', '\rx'])
+      expect(csvField(bad).replace(/^"/, '').startsWith("'")).toBe(true);
     expect(csvField('=A1,B1')).toBe(`"'=A1,B1"`);
   });
 
@@ -37,7 +38,22 @@ describe('reportRankingCsv', () => {
 
   it('has a header naming the measure and each ring with its radius and unit, and CRLF line ends', () => {
     const [header] = parse(text);
-    expect(header).toEqual(['rank', 'name', 'lon', 'lat', 'value (net new demand)', 'captured', 'cannibalization', 'net new', 'share', 'ring 1 km', 'ring 3 km', 'min rank', 'max rank', 'site id']);
+    expect(header).toEqual([
+      'rank',
+      'name',
+      'lon',
+      'lat',
+      'value (net new demand)',
+      'captured',
+      'cannibalization',
+      'net new',
+      'share',
+      'ring 1 km',
+      'ring 3 km',
+      'min rank',
+      'max rank',
+      'site id',
+    ]);
     expect(text.split('\r\n')).toHaveLength(5);
   });
 

@@ -33,7 +33,8 @@ const round = (x: number, digits: number) => (Number.isFinite(x) ? Number(x.toFi
  * res.send(reportRankingCsv(reportFromRun(run, workspaceName)));
  */
 export function reportRankingCsv(model: ReportModel): string {
-  const rings = model.sites[0]?.score.rings ?? model.settings.radiiM.map((radiusM) => ({ radiusM, demand: 0 }));
+  const rings =
+    model.sites[0]?.score.rings ?? model.settings.radiiM.map((radiusM) => ({ radiusM, demand: 0 }));
   const header = [
     ...(model.kind === 'shortlist' ? ['position'] : []),
     'rank',
@@ -66,5 +67,7 @@ export function reportRankingCsv(model: ReportModel): string {
     s.stability?.maxRank ?? null,
     s.siteId,
   ]);
-  return '\uFEFF' + [header, ...rows].map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n';
+  return (
+    '\uFEFF' + [header, ...rows].map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n'
+  );
 }

@@ -15,7 +15,14 @@ describe('reportSitesGeojson', () => {
       expect(f.geometry.type).toBe('Point');
       expect(f.geometry.coordinates).toHaveLength(2);
     }
-    expect(fc.features.map((f: { properties: { kind: string } }) => f.properties.kind)).toEqual(['candidate', 'candidate', 'candidate', 'own', 'own', 'competitor']);
+    expect(fc.features.map((f: { properties: { kind: string } }) => f.properties.kind)).toEqual([
+      'candidate',
+      'candidate',
+      'candidate',
+      'own',
+      'own',
+      'competitor',
+    ]);
   });
 
   it('puts longitude first and rounds to 6 decimals', () => {
@@ -25,7 +32,17 @@ describe('reportSitesGeojson', () => {
 
   it('gives candidates their rank, score parts, rings and rank range', () => {
     const p = fc.features.find((f: { id: string }) => f.id === 'c-quay').properties;
-    expect(p).toMatchObject({ rank: 1, measure: 'netNew', captured: 12_400.25, cannibalization: 3_100, netNew: 9_300.25, ring_1_km: 3_200.5, ring_3_km: 14_000, minRank: 1, maxRank: 2 });
+    expect(p).toMatchObject({
+      rank: 1,
+      measure: 'netNew',
+      captured: 12_400.25,
+      cannibalization: 3_100,
+      netNew: 9_300.25,
+      ring_1_km: 3_200.5,
+      ring_3_km: 14_000,
+      minRank: 1,
+      maxRank: 2,
+    });
     expect(p.value).toBe(p.netNew);
     expect(p.shareOfTotal).toBeCloseTo(0.31, 3);
     expect(p.explanation).toMatch(/Ranks 1 of 3/);

@@ -7,7 +7,12 @@ type Properties = Record<string, string | number | boolean | null>;
 /** A GeoJSON FeatureCollection of points (RFC 7946). */
 export interface SitesFeatureCollection {
   type: 'FeatureCollection';
-  features: Array<{ type: 'Feature'; id: string; geometry: { type: 'Point'; coordinates: [number, number] }; properties: Properties }>;
+  features: Array<{
+    type: 'Feature';
+    id: string;
+    geometry: { type: 'Point'; coordinates: [number, number] };
+    properties: Properties;
+  }>;
 }
 
 const deg = (x: number) => Number(x.toFixed(6));
@@ -52,7 +57,9 @@ export function reportSitesGeojson(run: ScoringRunJson): SitesFeatureCollection 
           netNew: c.netNew,
           shareOfTotal: c.shareOfTotal,
         });
-        c.rings.forEach((r, k) => (properties[ringKey(ringLabel(run.settings, k, r.radiusM))] = r.demand));
+        c.rings.forEach(
+          (r, k) => (properties[ringKey(ringLabel(run.settings, k, r.radiusM))] = r.demand),
+        );
         const range = stability.get(site.siteId);
         properties.minRank = range?.minRank ?? null;
         properties.maxRank = range?.maxRank ?? null;
@@ -60,7 +67,12 @@ export function reportSitesGeojson(run: ScoringRunJson): SitesFeatureCollection 
       }
       if (site.kind === 'own') properties.demandToday = today.get(site.siteId) ?? null;
       properties.weightLabel = run.weightLabel;
-      return { type: 'Feature', id: site.siteId, geometry: { type: 'Point', coordinates: [deg(site.lon), deg(site.lat)] }, properties };
+      return {
+        type: 'Feature',
+        id: site.siteId,
+        geometry: { type: 'Point', coordinates: [deg(site.lon), deg(site.lat)] },
+        properties,
+      };
     }),
   };
 }

@@ -14,7 +14,8 @@ type Settings = Pick<ScoringSettingsJson, 'radii' | 'radiusUnit'> & { radiiM: nu
  */
 export function ringLabel(settings: Settings, index: number, radiusM: number): string {
   const r = settings.radii[index];
-  if (r !== undefined && Math.abs((settings.radiiM[index] ?? radiusM) - radiusM) < 1e-6) return `${r} ${settings.radiusUnit}`;
+  if (r !== undefined && Math.abs((settings.radiiM[index] ?? radiusM) - radiusM) < 1e-6)
+    return `${r} ${settings.radiusUnit}`;
   return `${Number((radiusM / 1000).toFixed(3))} km`;
 }
 

@@ -1,5 +1,9 @@
 import { AppError } from '../common/errors.js';
-import type { CandidateScoreJson, ScoringRunJson, ScoringSettingsJson } from '../scoring/scoring.types.js';
+import type {
+  CandidateScoreJson,
+  ScoringRunJson,
+  ScoringSettingsJson,
+} from '../scoring/scoring.types.js';
 import { SHORTLIST_CAUTION } from '../shortlist/shortlist-caution.js';
 import type { ShortlistJson } from '../shortlist/shortlist.types.js';
 
@@ -34,7 +38,12 @@ export interface ReportModel {
   totalDemand: number;
   candidateCount: number;
   /** Shortlist version shown (null for a ranking). */
-  version: { version: number; versionNote: string; createdAt: string; createdBy: string | null } | null;
+  version: {
+    version: number;
+    versionNote: string;
+    createdAt: string;
+    createdBy: string | null;
+  } | null;
   caution: string;
   sites: ReportSite[];
   ownStores: Array<{ siteId: string; name: string; lon: number; lat: number }>;
@@ -51,7 +60,12 @@ export interface ReportModel {
  */
 export function runResultsRequire(run: ScoringRunJson): NonNullable<ScoringRunJson['results']> {
   if (run.status !== 'succeeded' || !run.results) {
-    throw new AppError(409, 'RUN_NOT_READY', `Scoring run "${run.name}" is ${run.status}; only a succeeded run can be exported or shortlisted. Wait for it to finish, or start a new run.`, 'scoringRunId');
+    throw new AppError(
+      409,
+      'RUN_NOT_READY',
+      `Scoring run "${run.name}" is ${run.status}; only a succeeded run can be exported or shortlisted. Wait for it to finish, or start a new run.`,
+      'scoringRunId',
+    );
   }
   return run.results;
 }
@@ -63,10 +77,13 @@ export function runResultsRequire(run: ScoringRunJson): NonNullable<ScoringRunJs
  * @example
  * const range = runStabilityBySite(run).get(siteId);
  */
-export function runStabilityBySite(run: ScoringRunJson): Map<string, { minRank: number; maxRank: number; unstable: boolean }> {
+export function runStabilityBySite(
+  run: ScoringRunJson,
+): Map<string, { minRank: number; maxRank: number; unstable: boolean }> {
   const out = new Map<string, { minRank: number; maxRank: number; unstable: boolean }>();
   if (run.stability?.status !== 'succeeded') return out;
-  for (const s of run.stability.sites) out.set(s.siteId, { minRank: s.minRank, maxRank: s.maxRank, unstable: s.unstable });
+  for (const s of run.stability.sites)
+    out.set(s.siteId, { minRank: s.minRank, maxRank: s.maxRank, unstable: s.unstable });
   return out;
 }
 
@@ -83,7 +100,10 @@ export function reportFromRun(run: ScoringRunJson, workspaceName: string): Repor
   const results = runResultsRequire(run);
   const sitesById = new Map(run.sites.map((s) => [s.siteId, s]));
   const stability = runStabilityBySite(run);
-  const stores = (kind: 'own' | 'competitor') => run.sites.filter((s) => s.kind === kind).map((s) => ({ siteId: s.siteId, name: s.name, lon: s.lon, lat: s.lat }));
+  const stores = (kind: 'own' | 'competitor') =>
+    run.sites
+      .filter((s) => s.kind === kind)
+      .map((s) => ({ siteId: s.siteId, name: s.name, lon: s.lon, lat: s.lat }));
   return {
     kind: 'ranking',
     title: run.name,
@@ -140,7 +160,12 @@ export function reportFromShortlist(shortlist: ShortlistJson): ReportModel {
     weightLabel: v.weightLabel,
     totalDemand: v.totalDemand,
     candidateCount: v.candidateCount,
-    version: { version: v.version, versionNote: v.versionNote, createdAt: v.createdAt, createdBy: v.createdBy?.name ?? null },
+    version: {
+      version: v.version,
+      versionNote: v.versionNote,
+      createdAt: v.createdAt,
+      createdBy: v.createdBy?.name ?? null,
+    },
     caution: shortlist.caution,
     sites: v.items.map((i) => ({
       position: i.order,

@@ -30,22 +30,38 @@ export function reportParameterRows(model: ReportModel): ParameterRow[] {
   if (model.version) {
     const v = model.version;
     rows.push({ label: 'Shortlist', value: model.title });
-    rows.push({ label: 'Version', value: `${v.version} of ${v.createdAt.slice(0, 10)}${v.createdBy ? ` by ${v.createdBy}` : ''}${v.versionNote ? ` — ${v.versionNote}` : ''}` });
+    rows.push({
+      label: 'Version',
+      value: `${v.version} of ${v.createdAt.slice(0, 10)}${v.createdBy ? ` by ${v.createdBy}` : ''}${v.versionNote ? ` — ${v.versionNote}` : ''}`,
+    });
   }
   rows.push({ label: 'Scoring run', value: model.runName });
   rows.push({ label: 'Demand surface', value: model.surfaceName });
   if (model.surface) {
     const f = model.surface;
-    rows.push({ label: 'Kernel and bandwidth', value: `${f.kernel}, bandwidth ${numberText(f.bandwidthM)} m, cells ${numberText(f.cellSizeM)} m (${f.projection})` });
+    rows.push({
+      label: 'Kernel and bandwidth',
+      value: `${f.kernel}, bandwidth ${numberText(f.bandwidthM)} m, cells ${numberText(f.cellSizeM)} m (${f.projection})`,
+    });
   }
   rows.push({ label: 'Huff model α (attractiveness exponent)', value: s.alpha });
   rows.push({ label: 'Huff model β (distance decay)', value: s.beta });
-  rows.push({ label: 'Smallest store–demand distance', value: s.minDistanceM === null ? 'half a grid cell' : `${numberText(s.minDistanceM)} m` });
+  rows.push({
+    label: 'Smallest store–demand distance',
+    value: s.minDistanceM === null ? 'half a grid cell' : `${numberText(s.minDistanceM)} m`,
+  });
   rows.push({ label: 'Ring radii', value: s.radiiM.map((r, k) => ringLabel(s, k, r)).join(', ') });
   rows.push({ label: 'Ranked by', value: measureLabel(s.measure, s) });
   rows.push({ label: 'Unit of demand', value: model.weightLabel });
-  rows.push({ label: `Total demand (${model.weightLabel})`, value: model.totalDemand, numFmt: DEMAND_FORMAT });
+  rows.push({
+    label: `Total demand (${model.weightLabel})`,
+    value: model.totalDemand,
+    numFmt: DEMAND_FORMAT,
+  });
   rows.push({ label: 'Candidates scored', value: model.candidateCount });
-  rows.push({ label: 'Own stores / competitors', value: `${model.ownStores.length} / ${model.competitors.length}` });
+  rows.push({
+    label: 'Own stores / competitors',
+    value: `${model.ownStores.length} / ${model.competitors.length}`,
+  });
   return rows;
 }

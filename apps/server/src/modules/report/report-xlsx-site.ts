@@ -1,7 +1,12 @@
 import type ExcelJS from 'exceljs';
 import { measureLabel, ringLabel } from './report-labels.js';
 import type { ReportModel, ReportSite } from './report-model.js';
-import { DEGREE_FORMAT, DEMAND_FORMAT, SHARE_FORMAT, reportParameterRows } from './report-parameters.js';
+import {
+  DEGREE_FORMAT,
+  DEMAND_FORMAT,
+  SHARE_FORMAT,
+  reportParameterRows,
+} from './report-parameters.js';
 
 function section(sheet: ExcelJS.Worksheet, title: string): void {
   sheet.addRow([]);
@@ -9,7 +14,13 @@ function section(sheet: ExcelJS.Worksheet, title: string): void {
   row.font = { bold: true, size: 12 };
 }
 
-function line(sheet: ExcelJS.Worksheet, label: string, value: string | number | null, numFmt?: string, detail?: string): ExcelJS.Row {
+function line(
+  sheet: ExcelJS.Worksheet,
+  label: string,
+  value: string | number | null,
+  numFmt?: string,
+  detail?: string,
+): ExcelJS.Row {
   const row = sheet.addRow([label, value, detail ?? null]);
   if (numFmt) row.getCell(2).numFmt = numFmt;
   row.getCell(2).alignment = { horizontal: typeof value === 'number' ? 'right' : 'left' };
@@ -37,7 +48,11 @@ function paragraph(sheet: ExcelJS.Worksheet, text: string): void {
  * @example
  * reportSiteFill(workbook.addWorksheet('1 Quay corner'), model, model.sites[0]);
  */
-export function reportSiteFill(sheet: ExcelJS.Worksheet, model: ReportModel, site: ReportSite): void {
+export function reportSiteFill(
+  sheet: ExcelJS.Worksheet,
+  model: ReportModel,
+  site: ReportSite,
+): void {
   const s = model.settings;
   const unit = model.weightLabel;
   sheet.getColumn(1).width = 34;
@@ -45,29 +60,84 @@ export function reportSiteFill(sheet: ExcelJS.Worksheet, model: ReportModel, sit
   sheet.getColumn(3).width = 60;
   const title = sheet.addRow([site.name]);
   title.font = { bold: true, size: 14 };
-  sheet.addRow([`${model.kind === 'shortlist' ? `Shortlist "${model.title}"` : `Ranking of run "${model.runName}"`} — ${model.workspaceName}`]);
+  sheet.addRow([
+    `${model.kind === 'shortlist' ? `Shortlist "${model.title}"` : `Ranking of run "${model.runName}"`} — ${model.workspaceName}`,
+  ]);
 
   section(sheet, 'Score');
   if (site.position !== null) line(sheet, 'Position in the shortlist', site.position);
-  line(sheet, 'Rank', site.score.rank, undefined, `of ${model.candidateCount} candidates by ${measureLabel(s.measure, s)}`);
-  line(sheet, 'Value of the ranking measure', site.score.value, s.measure === 'shareOfTotal' ? SHARE_FORMAT : DEMAND_FORMAT, measureLabel(s.measure, s));
-  line(sheet, 'Captured demand', site.score.captured, DEMAND_FORMAT, `${unit} the site would draw (Huff model)`);
-  line(sheet, 'Cannibalization', site.score.cannibalization, DEMAND_FORMAT, `${unit} of that taken from own stores`);
-  line(sheet, 'Net new demand', site.score.netNew, DEMAND_FORMAT, `${unit} new to the chain (captured − cannibalization)`);
-  line(sheet, 'Share of total demand', site.score.shareOfTotal, SHARE_FORMAT, `of ${model.totalDemand.toLocaleString('en-US', { maximumFractionDigits: 0 })} ${unit} on the surface`);
+  line(
+    sheet,
+    'Rank',
+    site.score.rank,
+    undefined,
+    `of ${model.candidateCount} candidates by ${measureLabel(s.measure, s)}`,
+  );
+  line(
+    sheet,
+    'Value of the ranking measure',
+    site.score.value,
+    s.measure === 'shareOfTotal' ? SHARE_FORMAT : DEMAND_FORMAT,
+    measureLabel(s.measure, s),
+  );
+  line(
+    sheet,
+    'Captured demand',
+    site.score.captured,
+    DEMAND_FORMAT,
+    `${unit} the site would draw (Huff model)`,
+  );
+  line(
+    sheet,
+    'Cannibalization',
+    site.score.cannibalization,
+    DEMAND_FORMAT,
+    `${unit} of that taken from own stores`,
+  );
+  line(
+    sheet,
+    'Net new demand',
+    site.score.netNew,
+    DEMAND_FORMAT,
+    `${unit} new to the chain (captured − cannibalization)`,
+  );
+  line(
+    sheet,
+    'Share of total demand',
+    site.score.shareOfTotal,
+    SHARE_FORMAT,
+    `of ${model.totalDemand.toLocaleString('en-US', { maximumFractionDigits: 0 })} ${unit} on the surface`,
+  );
   if (site.stability) {
     const { minRank, maxRank, unstable } = site.stability;
-    line(sheet, 'Rank range across bandwidths', `${minRank}–${maxRank}`, undefined, unstable ? 'the rank moves a lot when the bandwidth changes; treat it with care' : 'rescored at 0.5×, 0.75×, 1.5× and 2× the bandwidth');
+    line(
+      sheet,
+      'Rank range across bandwidths',
+      `${minRank}–${maxRank}`,
+      undefined,
+      unstable
+        ? 'the rank moves a lot when the bandwidth changes; treat it with care'
+        : 'rescored at 0.5×, 0.75×, 1.5× and 2× the bandwidth',
+    );
   } else {
-    line(sheet, 'Rank range across bandwidths', 'not computed', undefined, 'run the rank stability check on the scoring run');
+    line(
+      sheet,
+      'Rank range across bandwidths',
+      'not computed',
+      undefined,
+      'run the rank stability check on the scoring run',
+    );
   }
 
   section(sheet, 'Taken from own stores');
   if (site.score.cannibalizedFrom.length === 0) line(sheet, 'none', null);
-  for (const store of site.score.cannibalizedFrom) line(sheet, store.name, store.demand, DEMAND_FORMAT, unit);
+  for (const store of site.score.cannibalizedFrom)
+    line(sheet, store.name, store.demand, DEMAND_FORMAT, unit);
 
   section(sheet, 'Ring trade areas (demand inside each radius)');
-  site.score.rings.forEach((r, k) => line(sheet, `Within ${ringLabel(s, k, r.radiusM)}`, r.demand, DEMAND_FORMAT, unit));
+  site.score.rings.forEach((r, k) =>
+    line(sheet, `Within ${ringLabel(s, k, r.radiusM)}`, r.demand, DEMAND_FORMAT, unit),
+  );
 
   section(sheet, 'Why it ranks here');
   paragraph(sheet, site.score.explanation || '–');

@@ -1,7 +1,12 @@
 import type ExcelJS from 'exceljs';
 import { measureLabel, ringLabel } from './report-labels.js';
 import type { ReportModel } from './report-model.js';
-import { DEGREE_FORMAT, DEMAND_FORMAT, SHARE_FORMAT, reportParameterRows } from './report-parameters.js';
+import {
+  DEGREE_FORMAT,
+  DEMAND_FORMAT,
+  SHARE_FORMAT,
+  reportParameterRows,
+} from './report-parameters.js';
 
 interface Column {
   header: string;
@@ -22,19 +27,55 @@ function summaryColumns(model: ReportModel): Column[] {
   }));
   return [
     { header: 'Site', width: 34, value: (site) => site.name },
-    ...(model.kind === 'shortlist' ? [{ header: 'Position', width: 10, value: (site: ReportModel['sites'][number]) => site.position }] : []),
+    ...(model.kind === 'shortlist'
+      ? [
+          {
+            header: 'Position',
+            width: 10,
+            value: (site: ReportModel['sites'][number]) => site.position,
+          },
+        ]
+      : []),
     { header: 'Rank', width: 8, value: (site) => site.score.rank },
-    { header: `Value: ${measureLabel(s.measure, s)}`, width: 18, numFmt: valueFormat, value: (site) => site.score.value },
+    {
+      header: `Value: ${measureLabel(s.measure, s)}`,
+      width: 18,
+      numFmt: valueFormat,
+      value: (site) => site.score.value,
+    },
     { header: 'Captured', width: 14, numFmt: DEMAND_FORMAT, value: (site) => site.score.captured },
-    { header: 'Cannibalization', width: 16, numFmt: DEMAND_FORMAT, value: (site) => site.score.cannibalization },
+    {
+      header: 'Cannibalization',
+      width: 16,
+      numFmt: DEMAND_FORMAT,
+      value: (site) => site.score.cannibalization,
+    },
     { header: 'Net new', width: 14, numFmt: DEMAND_FORMAT, value: (site) => site.score.netNew },
-    { header: 'Share of total', width: 14, numFmt: SHARE_FORMAT, value: (site) => site.score.shareOfTotal },
+    {
+      header: 'Share of total',
+      width: 14,
+      numFmt: SHARE_FORMAT,
+      value: (site) => site.score.shareOfTotal,
+    },
     ...rings,
-    { header: 'Rank range', width: 12, value: (site) => (site.stability ? `${site.stability.minRank}–${site.stability.maxRank}` : null) },
-    { header: 'Rank moves a lot', width: 16, value: (site) => (site.stability ? (site.stability.unstable ? 'yes' : 'no') : null) },
+    {
+      header: 'Rank range',
+      width: 12,
+      value: (site) =>
+        site.stability ? `${site.stability.minRank}–${site.stability.maxRank}` : null,
+    },
+    {
+      header: 'Rank moves a lot',
+      width: 16,
+      value: (site) => (site.stability ? (site.stability.unstable ? 'yes' : 'no') : null),
+    },
     { header: 'Longitude', width: 13, numFmt: DEGREE_FORMAT, value: (site) => site.lon },
     { header: 'Latitude', width: 13, numFmt: DEGREE_FORMAT, value: (site) => site.lat },
-    { header: model.kind === 'shortlist' ? "Planner's note" : 'Site notes', width: 48, value: (site) => site.note || null },
+    {
+      header: model.kind === 'shortlist' ? "Planner's note" : 'Site notes',
+      width: 48,
+      value: (site) => site.note || null,
+    },
   ];
 }
 
@@ -51,7 +92,11 @@ function summaryColumns(model: ReportModel): Column[] {
 export function reportSummaryFill(sheet: ExcelJS.Worksheet, model: ReportModel): number {
   const columns = summaryColumns(model);
   columns.forEach((c, k) => (sheet.getColumn(k + 1).width = c.width));
-  const title = sheet.addRow([model.kind === 'shortlist' ? `Demandscape shortlist: ${model.title}` : `Demandscape ranking: ${model.title}`]);
+  const title = sheet.addRow([
+    model.kind === 'shortlist'
+      ? `Demandscape shortlist: ${model.title}`
+      : `Demandscape ranking: ${model.title}`,
+  ]);
   title.font = { bold: true, size: 14 };
   sheet.addRow([]);
   for (const p of reportParameterRows(model)) {
@@ -75,7 +120,18 @@ export function reportSummaryFill(sheet: ExcelJS.Worksheet, model: ReportModel):
     const row = sheet.addRow(columns.map((c) => c.value(site)));
     columns.forEach((c, k) => c.numFmt && (row.getCell(k + 1).numFmt = c.numFmt));
   }
-  sheet.views = [{ state: 'frozen', xSplit: 1, ySplit: header.number, topLeftCell: `B${header.number + 1}`, activeCell: 'A1' }];
-  sheet.autoFilter = { from: { row: header.number, column: 1 }, to: { row: header.number + model.sites.length, column: columns.length } };
+  sheet.views = [
+    {
+      state: 'frozen',
+      xSplit: 1,
+      ySplit: header.number,
+      topLeftCell: `B${header.number + 1}`,
+      activeCell: 'A1',
+    },
+  ];
+  sheet.autoFilter = {
+    from: { row: header.number, column: 1 },
+    to: { row: header.number + model.sites.length, column: columns.length },
+  };
   return header.number;
 }

@@ -26,15 +26,26 @@ describe('reportWorkbook (ranking)', () => {
   const run = reportRunFixture();
 
   it('has a Summary sheet and one sheet per candidate with sanitised names', async () => {
-    const wb = await readBack(await reportWorkbook(reportFromRun(run, 'North corridor'), new Date('2026-12-02T03:00:00Z')));
-    expect(wb.worksheets.map((s) => s.name)).toEqual(['Summary', '1 Quay "corner", east', '2 Mill Lane', '3 =HYPERLINK("x")']);
+    const wb = await readBack(
+      await reportWorkbook(reportFromRun(run, 'North corridor'), new Date('2026-12-02T03:00:00Z')),
+    );
+    expect(wb.worksheets.map((s) => s.name)).toEqual([
+      'Summary',
+      '1 Quay "corner", east',
+      '2 Mill Lane',
+      '3 =HYPERLINK("x")',
+    ]);
   });
 
   it('summary: parameters, caution, ranked table with formats, widths, frozen header and autofilter', async () => {
-    const wb = await readBack(await reportWorkbook(reportFromRun(run, 'North corridor'), new Date()));
+    const wb = await readBack(
+      await reportWorkbook(reportFromRun(run, 'North corridor'), new Date()),
+    );
     const sheet = wb.getWorksheet('Summary')!;
     expect(rowOf(sheet, 'Workspace').getCell(2).value).toBe('North corridor');
-    expect(rowOf(sheet, 'Kernel and bandwidth').getCell(2).value).toBe('quartic, bandwidth 1,200 m, cells 100 m (EPSG:32624)');
+    expect(rowOf(sheet, 'Kernel and bandwidth').getCell(2).value).toBe(
+      'quartic, bandwidth 1,200 m, cells 100 m (EPSG:32624)',
+    );
     expect(rowOf(sheet, 'Huff model β (distance decay)').getCell(2).value).toBe(2);
     expect(rowOf(sheet, 'Ring radii').getCell(2).value).toBe('1 km, 3 km');
     const total = rowOf(sheet, 'Total demand (customers)').getCell(2);
@@ -60,7 +71,9 @@ describe('reportWorkbook (ranking)', () => {
   });
 
   it('site sheet: every score part with formats, per own store rows, rings, explanation and run parameters', async () => {
-    const wb = await readBack(await reportWorkbook(reportFromRun(run, 'North corridor'), new Date()));
+    const wb = await readBack(
+      await reportWorkbook(reportFromRun(run, 'North corridor'), new Date()),
+    );
     const sheet = wb.getWorksheet('2 Mill Lane')!;
     expect(sheet.getCell('A1').value).toBe('Mill Lane');
     expect(rowOf(sheet, 'Captured demand').getCell(2).value).toBe(8_000);
@@ -116,21 +129,40 @@ describe('reportWorkbook (shortlist)', () => {
         weightLabel: run.weightLabel,
         totalDemand: 40_000,
         candidateCount: 3,
-        items: [mill, quay].map((s, k) => ({ order: k + 1, siteId: s.siteId, name: s.name, lon: s.lon, lat: s.lat, attractiveness: s.attractiveness, attractivenessLabel: s.attractivenessLabel, note: k === 0 ? 'Lease offer in hand' : '', score: s.score, stability: s.stability })),
+        items: [mill, quay].map((s, k) => ({
+          order: k + 1,
+          siteId: s.siteId,
+          name: s.name,
+          lon: s.lon,
+          lat: s.lat,
+          attractiveness: s.attractiveness,
+          attractivenessLabel: s.attractivenessLabel,
+          note: k === 0 ? 'Lease offer in hand' : '',
+          score: s.score,
+          stability: s.stability,
+        })),
         ownStores: [],
         competitors: [],
       },
     } satisfies ShortlistJson;
     const wb = await readBack(await reportWorkbook(reportFromShortlist(shortlist), new Date()));
-    expect(wb.worksheets.map((s) => s.name)).toEqual(['Summary', '1 Mill Lane', '2 Quay "corner", east']);
+    expect(wb.worksheets.map((s) => s.name)).toEqual([
+      'Summary',
+      '1 Mill Lane',
+      '2 Quay "corner", east',
+    ]);
     const summary = wb.getWorksheet('Summary')!;
     expect(summary.getCell('A1').value).toBe('Demandscape shortlist: Board pick');
-    expect(rowOf(summary, 'Version').getCell(2).value).toBe('2 of 2026-12-02 by Pia Planner — Mill first');
+    expect(rowOf(summary, 'Version').getCell(2).value).toBe(
+      '2 of 2026-12-02 by Pia Planner — Mill first',
+    );
     const header = rowOf(summary, 'Site');
     expect(header.getCell(2).value).toBe('Position');
     expect(summary.getRow(header.number + 1).getCell(3).value).toBe(2);
     const site = wb.getWorksheet('1 Mill Lane')!;
     expect(rowOf(site, 'Position in the shortlist').getCell(2).value).toBe(1);
-    expect(site.getRow(rowOf(site, "Planner's note").number + 1).getCell(1).value).toBe('Lease offer in hand');
+    expect(site.getRow(rowOf(site, "Planner's note").number + 1).getCell(1).value).toBe(
+      'Lease offer in hand',
+    );
   });
 });

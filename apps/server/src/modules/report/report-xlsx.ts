@@ -18,7 +18,8 @@ export async function reportWorkbook(model: ReportModel, createdAt: Date): Promi
   const workbook = new ExcelJS.Workbook();
   workbook.creator = 'Demandscape';
   workbook.created = createdAt;
-  workbook.title = model.kind === 'shortlist' ? `Shortlist ${model.title}` : `Ranking ${model.title}`;
+  workbook.title =
+    model.kind === 'shortlist' ? `Shortlist ${model.title}` : `Ranking ${model.title}`;
   const used = new Set<string>();
   reportSummaryFill(workbook.addWorksheet(sheetNameUnique('Summary', used)), model);
   for (const site of model.sites) {
