@@ -1,7 +1,7 @@
 import { Alert, Button, Field, Input, Select, Spinner } from '@demandscape/ui';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, type UseFormReturn } from 'react-hook-form';
 import { ApiError, errorMessage } from '../../../lib/api-error';
 import { dateTimeText } from '../../../lib/format';
 import { useScoringSettings } from '../api/get-scoring-settings';
@@ -30,6 +30,21 @@ function formFieldOf(apiField: string): { name: FormField | `radii.${number}.val
   return null;
 }
 
+// Places every field error the server listed (`fields`, or the single `field`); false when none fits a field.
+function fieldErrorsPlaced(error: unknown, form: UseFormReturn<ScoringSettingsFormValues>): boolean {
+  if (!(error instanceof ApiError)) return false;
+  const listed = error.fields ?? (error.field ? { [error.field]: error.message } : {});
+  let placed = 0;
+  for (const [apiField, message] of Object.entries(listed)) {
+    const target = formFieldOf(apiField);
+    if (!target) continue;
+    if (target.root) form.setError('radii', { type: 'server', message });
+    else form.setError(target.name, { type: 'server', message }, { shouldFocus: placed === 0 });
+    placed += 1;
+  }
+  return placed > 0;
+}
+
 function SettingsEditor({ orgId, workspaceId, settings }: { orgId: string; workspaceId: string; settings: ScoringSettingsJson }) {
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
@@ -48,10 +63,7 @@ function SettingsEditor({ orgId, workspaceId, settings }: { orgId: string; works
         setSaved(true);
       },
       onError: (error) => {
-        const target = error instanceof ApiError && error.field ? formFieldOf(error.field) : null;
-        if (!target) return setFormError(errorMessage(error));
-        if (target.root) form.setError('radii', { type: 'server', message: error.message });
-        else form.setError(target.name, { type: 'server', message: error.message }, { shouldFocus: true });
+        if (!fieldErrorsPlaced(error, form)) setFormError(errorMessage(error));
       },
     });
   });

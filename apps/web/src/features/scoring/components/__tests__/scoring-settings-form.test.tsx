@@ -70,7 +70,10 @@ describe('ScoringSettingsForm', () => {
       http.get(url, () => HttpResponse.json({ settings: createScoringSettings() })),
       http.put(url, async ({ request }) => {
         body = (await request.json()) as typeof body;
-        return apiErrorResponse(400, 'INVALID_SETTINGS', 'The minimum distance must be below the smallest ring (1,609 m).', { field: 'minDistanceM' });
+        return apiErrorResponse(400, 'VALIDATION_FAILED', 'minDistanceM: The minimum distance must be below the smallest ring (1,609 m).', {
+          field: 'minDistanceM',
+          fields: { minDistanceM: 'The minimum distance must be below the smallest ring (1,609 m).', 'radii.2': 'ring radius 3.11 mi is taken' },
+        });
       }),
     );
     renderWithProviders(<ScoringSettingsForm orgId="org_1" workspaceId="wsp_1" canWrite />);
@@ -83,6 +86,8 @@ describe('ScoringSettingsForm', () => {
     const message = await screen.findByText('The minimum distance must be below the smallest ring (1,609 m).');
     await waitFor(() => expect(screen.getByLabelText('Minimum distance (m)')).toHaveAttribute('aria-invalid', 'true'));
     expect(message).toHaveAttribute('role', 'alert');
+    expect(screen.getByText('ring radius 3.11 mi is taken')).toBeInTheDocument();
+    expect(screen.getByLabelText('Ring 3 radius (mi)')).toHaveAttribute('aria-invalid', 'true');
     expect(body).toMatchObject({ radii: [0.62, 1.86, 3.11], radiusUnit: 'mi' });
   });
 
