@@ -37,6 +37,8 @@ export function ScoringStep({ orgId, workspaceId, surfaces, canWrite, onSiteLabe
   useEffect(() => {
     if (shownId === null) onSiteLabels?.({});
   }, [shownId, onSiteLabels]);
+  // The labels belong to the ranking shown here: take them off the map when the panel closes.
+  useEffect(() => () => onSiteLabels?.({}), [onSiteLabels]);
 
   return (
     <div className="flex flex-col gap-6">

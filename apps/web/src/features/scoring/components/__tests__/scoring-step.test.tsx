@@ -41,7 +41,7 @@ describe('ScoringStep', () => {
         return HttpResponse.json({ run });
       }),
     );
-    renderWithProviders(<ScoringStep orgId="org_1" workspaceId="wsp_1" surfaces={surfaces} canWrite onSiteLabels={labels} />);
+    const { unmount } = renderWithProviders(<ScoringStep orgId="org_1" workspaceId="wsp_1" surfaces={surfaces} canWrite onSiteLabels={labels} />);
 
     expect(await screen.findByText('No scoring runs yet.')).toBeInTheDocument();
     await userEvent.selectOptions(screen.getByLabelText('Demand surface'), 'larchloaf-loyalty.csv · quartic 1200 m');
@@ -64,6 +64,8 @@ describe('ScoringStep', () => {
     expect(screen.getByRole('link', { name: 'Sites with scores (GeoJSON)' })).toHaveAttribute('href', expect.stringMatching(/sites\.geojson$/));
     expect(labels).toHaveBeenLastCalledWith({ ste_c1: '#1', ste_c2: '#2', ste_c3: '#3' });
     await waitFor(() => expect(screen.getByRole('list', { name: 'Scoring runs' })).toHaveTextContent('Ready'));
+    unmount();
+    expect(labels).toHaveBeenLastCalledWith({});
   }, 15_000);
 
   it('opens the explanation and the loss per own store when a candidate is chosen', async () => {
