@@ -28,6 +28,7 @@ const MATRIX: RouteRow[] = [
   { method: 'GET', route: S, allowed: READERS, ok: 200 },
   { method: 'GET', route: `${S}?kind=own`, allowed: READERS, ok: 200 },
   { method: 'POST', route: S, body: SITE, allowed: WRITERS, ok: 201 },
+  { method: 'UPLOAD', route: `${S}/import/preview`, allowed: WRITERS, ok: 200 },
   { method: 'UPLOAD', route: `${S}/import`, allowed: WRITERS, ok: 201 },
   { method: 'PATCH', route: `${S}/:siteId`, body: { lon: -38.5, lat: 44.53 }, allowed: WRITERS, ok: 200 },
   { method: 'DELETE', route: `${S}/:siteId`, allowed: WRITERS, ok: 204 },

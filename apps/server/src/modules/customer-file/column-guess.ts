@@ -80,7 +80,19 @@ export function headerWords(header: string): string[] {
     .filter((w) => w !== '');
 }
 
-function columnFor(
+/**
+ * The first column (not yet taken) whose header is one of `words` (in the order of `words`), else
+ * whose header contains one of them as a word, else whose whole header spells one of `exactOnly`.
+ * Shared with the sites import (`modules/site/site-columns.ts`).
+ * @param columns - header names
+ * @param words - header words, most preferred first
+ * @param exactOnly - words accepted only as the whole header (e.g. `x`, `y`)
+ * @param taken - columns already given to another field
+ * @returns the column, or undefined when none fits
+ * @example
+ * columnFor(['Site name', 'Lat'], ['name'], [], new Set()); // 'Site name'
+ */
+export function columnFor(
   columns: string[],
   words: string[],
   exactOnly: string[],

@@ -177,7 +177,16 @@ export async function previewRows(
   return detected.hasHeader ? rows.slice(1) : rows;
 }
 
-async function firstLines(
+/**
+ * The first lines of a text file (up to 64 KB; a cut-off last line is dropped), for dialect detection.
+ * Shared with the sites import (`modules/site/site-file-read.ts`).
+ * @param path - the file
+ * @param encoding - from `textScan`
+ * @returns the lines without line breaks
+ * @example
+ * csvDialectDetect(await firstLines(path, 'utf-8'));
+ */
+export async function firstLines(
   path: string,
   encoding: CustomerFileDetected['encoding'],
 ): Promise<string[]> {

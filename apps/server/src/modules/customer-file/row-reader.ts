@@ -168,6 +168,8 @@ export function xlsxCellText(value: unknown): string {
     };
     if (Array.isArray(v.richText)) return v.richText.map((r) => r.text).join('');
     if ('result' in v) return xlsxCellText(v.result);
+    // A formula never calculated by a spreadsheet program has no saved value: read it as empty.
+    if ('formula' in v || 'sharedFormula' in v) return '';
     if (v.text !== undefined) return xlsxCellText(v.text);
     if (v.error !== undefined) return String(v.error);
   }

@@ -3,8 +3,8 @@ import type { EntityManager } from '@mikro-orm/sqlite';
 import { requireMembership, sessionUser } from '../common/guards.js';
 import { PERMISSIONS } from '../common/permissions.js';
 import { inputParse } from '../common/validate.js';
-import { siteCreateSchema, siteListQuerySchema, siteUpdateSchema } from './site.schemas.js';
-import { siteCsvReceive, siteImport } from './site-import.js';
+import { siteCreateSchema, siteImportFieldsSchema, siteListQuerySchema, siteUpdateSchema } from './site.schemas.js';
+import { siteFileReceive, siteFileUse, siteImport, siteImportPreview } from './site-import.js';
 import { siteCreate, siteDelete, siteList, siteUpdate, type SiteScope } from './site.service.js';
 
 function scopeOf(req: Request): SiteScope {
@@ -12,8 +12,8 @@ function scopeOf(req: Request): SiteScope {
 }
 
 /**
- * `/api/organizations/:orgId/workspaces/:workspaceId/sites`: list (filter by kind), create, CSV import
- * (all or nothing), edit/move, delete.
+ * `/api/organizations/:orgId/workspaces/:workspaceId/sites`: list (filter by kind), create, CSV/XLSX import
+ * preview (columns and guessed mapping) and import (all or nothing), edit/move, delete.
  * @param em - entity manager
  * @returns the router (mounted with the parent's `:orgId` and `:workspaceId`)
  * @example
@@ -32,8 +32,13 @@ export function siteRoutes(em: EntityManager): Router {
     res.status(201).json({ site: await siteCreate(em, scopeOf(req), sessionUser(req), input) });
   });
 
-  router.post('/import', requireMembership(em, PERMISSIONS['site.write']), siteCsvReceive(), async (req, res) => {
-    res.status(201).json(await siteImport(em, scopeOf(req), sessionUser(req), req.file!.buffer));
+  router.post('/import/preview', requireMembership(em, PERMISSIONS['site.write']), siteFileReceive(), async (req, res) => {
+    res.json(await siteFileUse(req.file!.path, (path) => siteImportPreview(em, scopeOf(req), path)));
+  });
+
+  router.post('/import', requireMembership(em, PERMISSIONS['site.write']), siteFileReceive(), async (req, res) => {
+    const result = await siteFileUse(req.file!.path, (path) => siteImport(em, scopeOf(req), sessionUser(req), path, inputParse(siteImportFieldsSchema, req.body)));
+    res.status(201).json(result);
   });
 
   router.patch('/:siteId', requireMembership(em, PERMISSIONS['site.write']), async (req, res) => {

@@ -40,3 +40,48 @@ export const siteListQuerySchema = z.object({ kind: kindField.optional() });
 
 export type SiteCreateInput = z.infer<typeof siteCreateSchema>;
 export type SiteUpdateInput = z.infer<typeof siteUpdateSchema>;
+
+const columnName = z.string({ message: 'must be a column name (text) or null' }).trim().min(1, 'must be a column name or null (no column)').nullable();
+
+/** `mapping` of an import: fields left out take the guessed column; null = no column. */
+export const siteMappingSchema = z.object(
+  {
+    name: columnName.optional(),
+    lon: columnName.optional(),
+    lat: columnName.optional(),
+    kind: columnName.optional(),
+    attractiveness: columnName.optional(),
+    attractivenessLabel: columnName.optional(),
+    notes: columnName.optional(),
+  },
+  { message: 'must be a JSON object like {"name":"Site name","lon":"Longitude","lat":"Latitude"}' },
+).strict();
+
+/** The text fields sent with an import upload (multipart form fields are strings). */
+export const siteImportFieldsSchema = z.object({
+  mapping: z
+    .string()
+    .optional()
+    .transform((text, ctx) => {
+      if (text === undefined || text.trim() === '') return undefined;
+      try {
+        return JSON.parse(text) as unknown;
+      } catch {
+        ctx.addIssue({ code: 'custom', message: 'must be JSON, e.g. {"name":"Site name","lon":"Longitude","lat":"Latitude"}' });
+        return z.NEVER;
+      }
+    })
+    .pipe(siteMappingSchema.optional()),
+  defaultKind: z
+    .string()
+    .optional()
+    .transform((text) => (text === undefined || text.trim() === '' ? undefined : text.trim().toLowerCase()))
+    .pipe(kindField.optional()),
+  defaultAttractiveness: z
+    .string()
+    .optional()
+    .transform((text) => (text === undefined || text.trim() === '' ? undefined : Number(text.trim())))
+    .pipe(attractivenessField.optional()),
+});
+
+export type SiteImportFields = z.infer<typeof siteImportFieldsSchema>;

@@ -17,6 +17,7 @@ export interface SiteScope {
 /** A site as the API returns it. */
 export interface SiteView {
   id: string;
+  workspaceId: string;
   kind: SiteKind;
   name: string;
   lon: number;
@@ -39,6 +40,7 @@ export interface SiteView {
 export function siteView(s: Site): SiteView {
   return {
     id: s.id,
+    workspaceId: s.workspace.id,
     kind: s.kind,
     name: s.name,
     lon: s.lon,
