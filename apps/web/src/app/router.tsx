@@ -75,6 +75,8 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: paths.org.members.path, lazy: () => import('./routes/org/members').then(load), ErrorBoundary: RouteError },
                 { path: paths.org.auditLog.path, lazy: () => import('./routes/org/audit-log').then(load), ErrorBoundary: RouteError },
                 { path: paths.org.billing.path, lazy: () => import('./routes/org/billing').then(load), ErrorBoundary: RouteError },
+                { path: paths.org.shortlists.path, lazy: () => import('./routes/org/shortlists').then(load), ErrorBoundary: RouteError },
+                { path: paths.org.shortlist.path, lazy: () => import('./routes/org/shortlist').then(load), ErrorBoundary: RouteError },
               ],
             },
           ],

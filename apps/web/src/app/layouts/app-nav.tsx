@@ -8,6 +8,7 @@ type NavItem = { label: string; href: (orgId: string) => string; permission: Per
 
 const items: NavItem[] = [
   { label: 'Workspaces', href: paths.org.workspaces.getHref, permission: 'workspace:read' },
+  { label: 'Shortlists', href: paths.org.shortlists.getHref, permission: 'shortlist:read' },
   { label: 'Members', href: paths.org.members.getHref, permission: 'members:read' },
   { label: 'Billing', href: paths.org.billing.getHref, permission: 'billing:manage' },
   { label: 'Audit log', href: paths.org.auditLog.getHref, permission: 'audit-log:read' },
