@@ -14,45 +14,37 @@ export interface HuffCandidatesBreakdown extends HuffCandidatesAlone {
 }
 
 /**
- * Σ_c q₀[c]·v[c] … for four rows of q against two share vectors at once (8 running sums), so
- * each loaded value serves two or four products (one row when fewer than four are left). Adds into
- * out[j·K + k]; returns how many rows were done.
+ * Σ_c q_k[c]·v[c] for two rows of q against two share vectors at once (4 running sums: each
+ * loaded value serves two products; measured faster than 4 × 2 or 4 × 1 blocks in V8, which
+ * runs short of registers). One row when only one is left. Adds into out[j·K + k]; returns how
+ * many rows were done.
  */
 function dotsAdd(q: Float64Array, b: number, len: number, k: number, K: number, v0: Float64Array, v1: Float64Array, j0: number, two: boolean, out: Float64Array): number {
   const o0 = k * b;
-  if (k + 3 < K) {
+  const r0 = j0 * K + k;
+  if (k + 1 < K) {
     const o1 = o0 + b;
-    const o2 = o1 + b;
-    const o3 = o2 + b;
-    let a0 = 0, a1 = 0, a2 = 0, a3 = 0, c0 = 0, c1 = 0, c2 = 0, c3 = 0; // prettier-ignore
+    let a0 = 0;
+    let a1 = 0;
+    let c0 = 0;
+    let c1 = 0;
     for (let c = 0; c < len; c++) {
       const x = v0[c];
       const y = v1[c];
       const q0 = q[o0 + c];
       const q1 = q[o1 + c];
-      const q2 = q[o2 + c];
-      const q3 = q[o3 + c];
       a0 += q0 * x;
       a1 += q1 * x;
-      a2 += q2 * x;
-      a3 += q3 * x;
       c0 += q0 * y;
       c1 += q1 * y;
-      c2 += q2 * y;
-      c3 += q3 * y;
     }
-    const r0 = j0 * K + k;
     out[r0] += a0;
     out[r0 + 1] += a1;
-    out[r0 + 2] += a2;
-    out[r0 + 3] += a3;
     if (two) {
       out[r0 + K] += c0;
       out[r0 + K + 1] += c1;
-      out[r0 + K + 2] += c2;
-      out[r0 + K + 3] += c3;
     }
-    return 4;
+    return 2;
   }
   let a0 = 0;
   let c0 = 0;
@@ -60,8 +52,8 @@ function dotsAdd(q: Float64Array, b: number, len: number, k: number, K: number, 
     a0 += q[o0 + c] * v0[c];
     c0 += q[o0 + c] * v1[c];
   }
-  out[j0 * K + k] += a0;
-  if (two) out[(j0 + 1) * K + k] += c0;
+  out[r0] += a0;
+  if (two) out[r0 + K] += c0;
   return 1;
 }
 
@@ -69,7 +61,7 @@ function dotsAdd(q: Float64Array, b: number, len: number, k: number, K: number, 
  * Scores every candidate alone like huffCandidatesAlone and also splits each candidate's
  * cannibalization by own store: store k loses L_jk = Σ_c W_c · q_ck · P_cj with q_ck =
  * A_k^α d_ck^(−β) / S_c its base share (A_k^α d^(−β)·(1/S − 1/(S + t)) = q·P). The q of a tile of
- * cells is computed once and reused by every candidate, two candidates and four stores at a
+ * cells is computed once and reused by every candidate, two candidates and two stores at a
  * time; the cost is candidates × own stores × cells multiply-adds (exact, no cut-off).
  *
  * @param grid today's network, precomputed by huffGrid
@@ -116,7 +108,7 @@ export function huffCandidatesBreakdown(
       const dx = xKm[c] - x;
       const dy = yKm[c] - y;
       const e = Math.max(minD, dx * dx + dy * dy);
-      const share = a / (a + S[c] * (beta === 2 ? e : squaredDistancePower(e, whole, quarters, halfBeta)));
+      const share = a / (a + S[c] * (beta === 2 ? e : (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta))));
       cap += W[c] * share;
       can += O[c] * share;
       out[i] = share;
@@ -136,7 +128,7 @@ export function huffCandidatesBreakdown(
         const dx = xKm[c] - kx[k];
         const dy = yKm[c] - ky[k];
         const e = Math.max(minD, dx * dx + dy * dy);
-        q[o + i] = (W[c] * ka[k]) / ((beta === 2 ? e : squaredDistancePower(e, whole, quarters, halfBeta)) * S[c]);
+        q[o + i] = (W[c] * ka[k]) / ((beta === 2 ? e : (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta))) * S[c]);
       }
     }
     for (let j = 0; j < m; j += 2) {

@@ -106,7 +106,7 @@ export function huffTileShares(grid: HuffGrid, r0: number, r1: number, t: Candid
     for (; i < i1; i++, p++) {
       const u = colX[i] - x;
       const e = Math.max(minD, u * u + dy2);
-      const share = a / (a + S[p] * (beta === 2 ? e : squaredDistancePower(e, whole, quarters, halfBeta)));
+      const share = a / (a + S[p] * (beta === 2 ? e : (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta))));
       cap += W[p] * share;
       can += O[p] * share;
       if (shares) shares[p - runs[4 * r0 + 3]] = share;

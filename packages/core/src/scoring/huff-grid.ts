@@ -78,7 +78,7 @@ export function huffTermsInto(grid: TermGrid, site: Site, out: Float64Array, add
     const dx = xKm[c] - sx;
     const dy = yKm[c] - sy;
     const e = Math.max(minDistanceSqKm, dx * dx + dy * dy);
-    out[c] += beta === 2 ? a / e : a / squaredDistancePower(e, whole, quarters, halfBeta);
+    out[c] += beta === 2 ? a / e : a / (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta));
   }
 }
 
@@ -104,8 +104,9 @@ function runTermsAdd(
   a: number,
   g: { minD: number; beta: number; pw: DistancePower; fourWay: boolean },
 ): void {
+  const { minD, beta } = g;
   let i = i0;
-  if (g.beta === 2 && g.fourWay && dy2 >= g.minD) {
+  if (beta === 2 && g.fourWay && dy2 >= minD) {
     for (; i + 3 < i1; i += 4, p += 4) {
       const u1 = colX[i] - sx;
       const u2 = colX[i + 1] - sx;
@@ -129,8 +130,8 @@ function runTermsAdd(
   const { whole, quarters, halfBeta } = g.pw;
   for (; i < i1; i++, p++) {
     const u = colX[i] - sx;
-    const e = Math.max(g.minD, u * u + dy2);
-    out[p] += g.beta === 2 ? a / e : a / squaredDistancePower(e, whole, quarters, halfBeta);
+    const e = Math.max(minD, u * u + dy2);
+    out[p] += beta === 2 ? a / e : a / (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta));
   }
 }
 

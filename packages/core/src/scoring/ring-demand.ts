@@ -1,5 +1,4 @@
 import { CoreError } from '../errors.js';
-import { discRectOverlap } from '../lib/disc-rect-overlap.js';
 import type { ScoringSurface } from './scoring-surface.js';
 
 /** International mile in metres (NIST SP 811, exact). */
@@ -18,6 +17,60 @@ export const RING_RADII_DEFAULT_M: readonly number[] = [1000, 3000, 5000];
  */
 export function ringRadiusFromMiles(miles: number): number {
   return miles * METRES_PER_MILE;
+}
+
+/**
+ * A row strip's part of the disc, for the disc centred at the origin: ys' = ys − y and
+ * yn' = yn − y its edges relative to the centre. `edge(X)` is the signed area of disc ∩ strip
+ * between the centre's column and X (X relative to the centre), so a cell [x0, x1] of the
+ * strip holds edge(x1 − x) − edge(x0 − x) of the disc. Each quadrant box [0, |X|] × [0, |Y|] is
+ * the box where the disc covers it fully, plus the column integral of √(r² − t²) beyond
+ * x* = √(r² − Y²) (antiderivative (t√(r² − t²) + r²·asin(t/r)) / 2) [D]; the integral at |X|
+ * is shared by the strip's two edges and the value at x* is one per strip, so a boundary
+ * cell costs one asin instead of eight for four separate quadrant boxes.
+ */
+class RingStrip {
+  private readonly r: number;
+  private readonly r2: number;
+  private readonly ySouth: number;
+  private readonly yNorth: number;
+  private readonly xsSouth: number;
+  private readonly xsNorth: number;
+  private readonly primSouth: number;
+  private readonly primNorth: number;
+
+  constructor(radius: number, ySouth: number, yNorth: number) {
+    this.r = radius;
+    this.r2 = radius * radius;
+    this.ySouth = ySouth;
+    this.yNorth = yNorth;
+    const ycS = Math.min(Math.abs(ySouth), radius);
+    const ycN = Math.min(Math.abs(yNorth), radius);
+    this.xsSouth = Math.sqrt(this.r2 - ycS * ycS);
+    this.xsNorth = Math.sqrt(this.r2 - ycN * ycN);
+    this.primSouth = this.prim(this.xsSouth);
+    this.primNorth = this.prim(this.xsNorth);
+  }
+
+  private prim(t: number): number {
+    return 0.5 * (t * Math.sqrt(Math.max(0, this.r2 - t * t)) + this.r2 * Math.asin(Math.min(1, t / this.r)));
+  }
+
+  /** Quadrant box [0, xc] × [0, |y|] ∩ disc, with prim(xc) passed in (NaN: not computed yet). */
+  private quadrant(xc: number, pc: number, y: number, xs: number, pxs: number): number {
+    const yc = Math.min(Math.abs(y), this.r);
+    if (xc * xc + yc * yc <= this.r2) return xc * yc;
+    return yc * xs + (Number.isNaN(pc) ? this.prim(xc) : pc) - pxs;
+  }
+
+  edge(x: number): number {
+    const xc = Math.min(Math.abs(x), this.r);
+    // prim(xc) is needed when the box pokes out of the disc; the north and south boxes share it.
+    const pc = xc > Math.min(this.xsNorth, this.xsSouth) ? this.prim(xc) : NaN;
+    const north = Math.sign(this.yNorth) * this.quadrant(xc, pc, this.yNorth, this.xsNorth, this.primNorth);
+    const south = Math.sign(this.ySouth) * this.quadrant(xc, pc, this.ySouth, this.xsSouth, this.primSouth);
+    return Math.sign(x) * (north - south);
+  }
 }
 
 /**
@@ -85,6 +138,9 @@ export function ringDemandRows(surface: ScoringSurface, x: number, y: number, ra
     let inner = 0;
     for (let i = f0; i <= f1; i++) inner += values[row + i];
     sum += inner * cellArea;
+    let strip: RingStrip | undefined;
+    let westEdgeAt = NaN; // the last east edge computed, reused as the next cell's west edge
+    let westEdge = 0;
     for (let i = i0; i <= i1; i++) {
       if (i === f0) {
         i = f1;
@@ -95,7 +151,11 @@ export function ringDemandRows(surface: ScoringSurface, x: number, y: number, ra
       const xw = originX + i * cellSize;
       const dxNear = x < xw ? xw - x : x > xw + cellSize ? x - xw - cellSize : 0;
       if (dxNear * dxNear + dyNear * dyNear >= r2) continue;
-      sum += v * discRectOverlap(x, y, radius, xw, ys, xw + cellSize, yn);
+      strip ??= new RingStrip(radius, ys - y, yn - y);
+      const west = westEdgeAt === i ? westEdge : strip.edge(xw - x);
+      westEdge = strip.edge(xw + cellSize - x);
+      westEdgeAt = i + 1;
+      sum += v * Math.max(0, westEdge - west);
     }
   }
   return sum / 1e6;
