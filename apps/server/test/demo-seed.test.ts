@@ -18,7 +18,7 @@ describe('demoSeed', () => {
 
   it('creates the demo organization, workspace and one user per role, and is idempotent', async () => {
     const first = await demoSeed(ds.orm.em.fork());
-    expect(first.created).toHaveLength(1 + 4 + 4 + 1);
+    expect(first.created).toHaveLength(1 + 4 + 4 + 1 + 1);
     const second = await demoSeed(ds.orm.em.fork());
     expect(second).toEqual({ created: [], organizationId: first.organizationId, workspaceId: first.workspaceId });
     const [{ n }]: { n: number }[] = await ds.orm.em.getConnection().execute('select count(*) as n from users');

@@ -7,6 +7,7 @@ import { OrganizationSchema, type Organization } from '../modules/organization/o
 import { UserSchema, type User } from '../modules/user/user.entity.js';
 import { WorkspaceSchema, type Workspace } from '../modules/workspace/workspace.entity.js';
 import { DEMO_CUSTOMER_FILE_NAME, demoCustomerFileSeed } from './demo-customer-file.js';
+import { DEMO_SITES, demoSitesSeed } from './demo-sites.js';
 import { DEMO_SURFACE_NAME, demoSurfaceQueue } from './demo-surface.js';
 
 /** The one password of every demo account (invented data; never use it for anything real). */
@@ -33,7 +34,8 @@ export interface DemoSeedImport {
 }
 
 /**
- * Creates the invented demo organization, its workspace and one user per role; with `imports`,
+ * Creates the invented demo organization, its workspace with the invented demo sites (own stores,
+ * candidates, competitors) and one user per role; with `imports`,
  * also the invented demo customer file (uploaded and imported by the demo analyst) and one queued
  * demand surface on it, when the workspace has no customer file yet. Idempotent: what exists is left as it is (passwords of
  * existing demo users are not reset).
@@ -56,6 +58,7 @@ export async function demoSeed(
   const hash = await passwordHash(DEMO_PASSWORD);
   let owner: User | null = null;
   let analyst: User | null = null;
+  let planner: User | null = null;
   for (const demo of DEMO_USERS) {
     let user = await em.findOne(UserSchema, { email: demo.email });
     if (!user) {
@@ -64,6 +67,7 @@ export async function demoSeed(
     }
     if (demo.role === 'owner') owner = user;
     if (demo.role === 'analyst') analyst = user;
+    if (demo.role === 'planner') planner = user;
     const membership = await em.findOne(MembershipSchema, { organization: org.id, user: user.id });
     if (!membership) {
       em.create(MembershipSchema, { id: entityId(), organization: org, user, role: demo.role } as Membership);
@@ -77,6 +81,9 @@ export async function demoSeed(
   }
   await em.flush();
   await billingDemoSetup(em, org.id);
+  if (planner && (await demoSitesSeed(em, { organizationId: org.id, workspaceId: workspace.id }, planner)) > 0) {
+    created.push(`${DEMO_SITES.length} demo sites`);
+  }
   if (imports && analyst) {
     const scope = { organizationId: org.id, workspaceId: workspace.id };
     const fileId = await demoCustomerFileSeed(em, imports.orm, imports.uploadsDir, scope, analyst);
