@@ -1,4 +1,5 @@
 import { Alert, Badge, Button, ProgressBar } from '@demandscape/ui';
+import { useState } from 'react';
 import { errorMessage } from '../../../lib/api-error';
 import { useCreateRankStability } from '../api/create-rank-stability';
 import type { ScoringRunJson } from '../types';
@@ -6,6 +7,9 @@ import { tauReading } from '../utils/tau-reading';
 import { RankRangeBar } from './rank-range-bar';
 
 export type RankStabilityPanelProps = { orgId: string; workspaceId: string; run: ScoringRunJson; canWrite: boolean };
+
+/** Stable sites listed beyond the unstable ones before "Show all". */
+export const STABILITY_FIRST_ROWS = 20;
 
 function placesText(n: number): string {
   const rounded = Math.round(n * 10) / 10;
@@ -21,7 +25,11 @@ function placesText(n: number): string {
  */
 export function RankStabilityPanel({ orgId, workspaceId, run, canWrite }: RankStabilityPanelProps) {
   const start = useCreateRankStability(orgId, workspaceId);
+  const [showAll, setShowAll] = useState(false);
   const s = run.stability;
+  // Long lists: the unstable sites and the top of the ranking first.
+  const sorted = [...(s?.sites ?? [])].sort((a, b) => a.baseRank - b.baseRank);
+  const listed = showAll ? sorted : sorted.filter((x) => x.unstable || x.baseRank <= STABILITY_FIRST_ROWS);
   const count = run.results?.candidates.length ?? run.candidateCount;
   const base = s?.variants.find((v) => v.factor === 1)?.bandwidthM ?? run.surface.bandwidthM;
 
@@ -66,7 +74,7 @@ export function RankStabilityPanel({ orgId, workspaceId, run, canWrite }: RankSt
               </tr>
             </thead>
             <tbody>
-              {[...s.sites].sort((a, b) => a.baseRank - b.baseRank).map((site) => (
+              {listed.map((site) => (
                 <tr key={site.siteId} className="border-b border-line">
                   <td className="py-1.5 pr-2">{site.name}</td>
                   <td className="py-1.5 pr-2">{site.baseRank}</td>
@@ -87,6 +95,11 @@ export function RankStabilityPanel({ orgId, workspaceId, run, canWrite }: RankSt
               ))}
             </tbody>
           </table>
+          {listed.length < sorted.length ? (
+            <Button variant="link" size="sm" className="w-fit" onClick={() => setShowAll(true)}>
+              Show all {sorted.length.toLocaleString('en')} candidates ({(sorted.length - listed.length).toLocaleString('en')} stable ones below rank {STABILITY_FIRST_ROWS} hidden)
+            </Button>
+          ) : null}
           <p className="text-xs text-ink-muted">
             Unstable: the rank moves by more than {placesText(s.threshold)} when the bandwidth changes; read such a site’s rank with care.
           </p>

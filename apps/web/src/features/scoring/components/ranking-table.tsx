@@ -1,4 +1,5 @@
-import { Fragment } from 'react';
+import { Button } from '@demandscape/ui';
+import { Fragment, useState } from 'react';
 import type { CandidateScoreJson, ScoringRunJson } from '../types';
 import { demandText, percentText } from '../utils/demand-text';
 import { radiusText } from '../utils/radius-units';
@@ -14,6 +15,9 @@ export type RankingTableProps = {
   onTick?: (siteId: string, ticked: boolean) => void;
 };
 
+/** Rows shown before "Show all": long rankings (hundreds of candidates) stay quick to read and render. */
+export const RANKING_FIRST_ROWS = 50;
+
 function valueText(c: CandidateScoreJson, measure: string, unit: string): string {
   return measure === 'shareOfTotal' ? percentText(c.value) : `${demandText(c.value)} ${unit}`;
 }
@@ -26,6 +30,7 @@ function valueText(c: CandidateScoreJson, measure: string, unit: string): string
  * @example <RankingTable run={run} selectedId={id} onSelect={setId} />
  */
 export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: RankingTableProps) {
+  const [showAll, setShowAll] = useState(false);
   const results = run.results;
   if (!results) return null;
   const unit = run.weightLabel;
@@ -58,7 +63,7 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
           </tr>
         </thead>
         <tbody>
-          {results.candidates.map((c) => {
+          {(showAll ? results.candidates : results.candidates.slice(0, RANKING_FIRST_ROWS)).map((c) => {
             const open = c.siteId === selectedId;
             return (
               <Fragment key={c.siteId}>
@@ -108,6 +113,11 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
           })}
         </tbody>
       </table>
+      {!showAll && results.candidates.length > RANKING_FIRST_ROWS ? (
+        <Button variant="link" size="sm" onClick={() => setShowAll(true)}>
+          Show all {results.candidates.length.toLocaleString('en')} candidates
+        </Button>
+      ) : null}
     </div>
   );
 }

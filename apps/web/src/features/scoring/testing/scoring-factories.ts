@@ -130,7 +130,7 @@ export function createFinishedScoringRun(overrides: Partial<ScoringRunJson> = {}
         { siteId: 'ste_o1', name: 'Larchloaf Old Quay', demand: 9000 },
         { siteId: 'ste_o2', name: 'Larchloaf Ropewalk', demand: 6000 },
       ],
-      candidates: threeCandidates,
+      candidates: threeCandidates.map((c) => ({ ...c })),
     },
     ...overrides,
   });
