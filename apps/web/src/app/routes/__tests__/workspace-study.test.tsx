@@ -20,6 +20,7 @@ function studyAs(role: Role, options: { files?: unknown[]; surfaces?: unknown[] 
     http.get(`${ws}/customer-files`, () => HttpResponse.json({ customerFiles: options.files ?? [] })),
     http.get(`${ws}/customer-files/cf_1`, () => HttpResponse.json({ customerFile: createImportedCustomerFile() })),
     http.get(`${ws}/surfaces`, () => HttpResponse.json({ surfaces: options.surfaces ?? [] })),
+    http.get(`${ws}/sites`, () => HttpResponse.json({ sites: [] })),
     http.get(`${ws}/surfaces/srf_1`, () => HttpResponse.json({ surface: (options.surfaces ?? [])[0] })),
     http.post(`${ws}/surfaces/estimate`, () => HttpResponse.json(createSurfaceEstimate())),
   );

@@ -5,26 +5,29 @@ import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-rou
 import { paths } from '../../../config/paths';
 import { getCustomerFilesQueryOptions, useCustomerFiles } from '../../../features/customer-files/api/get-customer-files';
 import { CustomerFilesStep } from '../../../features/customer-files/components/customer-files-step';
-import type { CustomerFile } from '../../../features/customer-files/types';
-import { SurfaceMap } from '../../../features/map/components/surface-map';
+import { BasemapSiteMap } from '../../../features/map/components/basemap-site-map';
+import { SiteSymbol } from '../../../features/map/components/site-legend';
+import { SurfaceMap, type SurfaceMapSiteProps } from '../../../features/map/components/surface-map';
+import type { MapSite } from '../../../features/map/types';
+import { getSitesQueryOptions, useSites } from '../../../features/sites/api/get-sites';
+import { useUpdateSite } from '../../../features/sites/api/update-site';
+import { SiteInspector } from '../../../features/sites/components/site-inspector';
+import { SitesStep } from '../../../features/sites/components/sites-step';
+import type { SitePick } from '../../../features/sites/types';
 import { getSurfacesQueryOptions, useSurfaces } from '../../../features/surfaces/api/get-surfaces';
 import { SurfaceInspector } from '../../../features/surfaces/components/surface-inspector';
 import { SurfacesStep } from '../../../features/surfaces/components/surfaces-step';
-import type { Surface } from '../../../features/surfaces/types';
 import { getWorkspaceQueryOptions, useWorkspace } from '../../../features/workspaces/api/get-workspace';
 import { DeleteWorkspaceConfirm } from '../../../features/workspaces/components/delete-workspace-confirm';
 import { EditWorkspaceForm } from '../../../features/workspaces/components/edit-workspace-form';
 import { InspectorEmptyState } from '../../../features/workspaces/components/inspector-empty-state';
 import { MapEmptyState } from '../../../features/workspaces/components/map-empty-state';
-import {
-  StudyOutline,
-  type StudyStepKey,
-  type StudyStepState,
-} from '../../../features/workspaces/components/study-outline';
+import { StudyOutline, type StudyStepKey } from '../../../features/workspaces/components/study-outline';
 import { roleCan } from '../../../lib/authorization';
 import { dateText } from '../../../lib/format';
 import { useOrgContext } from './org-context';
 import { orgMembership } from './org-membership';
+import { customersState, sitesState, surfaceState } from './workspace-step-states';
 
 /**
  * Loads the workspace before the page shows; a missing one (or another organization's) becomes the 404 page.
@@ -35,37 +38,21 @@ import { orgMembership } from './org-membership';
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    if (!(await orgMembership(queryClient, params.orgId))) return null;
+    const membership = await orgMembership(queryClient, params.orgId);
+    if (!membership) return null;
     const orgId = params.orgId ?? '';
     const workspaceId = params.workspaceId ?? '';
     await queryClient.ensureQueryData(getWorkspaceQueryOptions(orgId, workspaceId));
     // The steps' lists load alongside; the page shows their own spinners if they are slower.
     void queryClient.prefetchQuery(getCustomerFilesQueryOptions(orgId, workspaceId));
     void queryClient.prefetchQuery(getSurfacesQueryOptions(orgId, workspaceId));
+    if (roleCan(membership.role, 'site:read')) void queryClient.prefetchQuery(getSitesQueryOptions(orgId, workspaceId));
     return null;
   };
 
-const openSteps = ['customers', 'surface'] as const satisfies readonly StudyStepKey[];
-
-function customersState(files: CustomerFile[] | undefined): StudyStepState | undefined {
-  if (!files?.length) return undefined;
-  const imported = files.filter((f) => f.status === 'imported');
-  if (imported.length) {
-    const n = imported[0]!.acceptedCount - imported[0]!.excludedCount;
-    return { label: 'Imported', tone: 'success', detail: `“${imported[0]!.name}”: ${n.toLocaleString('en')} customers.` };
-  }
-  if (files.some((f) => f.status === 'importing')) return { label: 'Importing', tone: 'accent' };
-  if (files.some((f) => f.status === 'awaiting-mapping')) return { label: 'Columns to check', tone: 'caution' };
-  return { label: 'Import failed', tone: 'danger' };
-}
-
-function surfaceState(surfaces: Surface[] | undefined): StudyStepState | undefined {
-  if (!surfaces?.length) return undefined;
-  if (surfaces.some((s) => s.status === 'running' || s.status === 'queued')) return { label: 'Running', tone: 'accent' };
-  const done = surfaces.filter((s) => s.status === 'succeeded').length;
-  if (done) return { label: 'Ready', tone: 'success', detail: `${done} demand ${done === 1 ? 'surface' : 'surfaces'} ready to show on the map.` };
-  return { label: 'No result yet', tone: 'caution' };
-}
+/** Every step opens its panel below the map. */
+const openSteps = ['customers', 'surface', 'sites', 'shortlist'] as const satisfies readonly StudyStepKey[];
+type OpenStep = (typeof openSteps)[number];
 
 /** One study: its four steps on the left, the map in the middle, the inspector on the right, the open step below. */
 export default function WorkspaceRoute() {
@@ -76,15 +63,30 @@ export default function WorkspaceRoute() {
   const [dialog, setDialog] = useState<'edit' | 'delete' | null>(null);
   const files = useCustomerFiles(orgId, workspaceId);
   const surfaces = useSurfaces(orgId, workspaceId);
-  const [chosenStep, setChosenStep] = useState<(typeof openSteps)[number] | null>(null);
+  const canReadSites = roleCan(role, 'site:read');
+  const canWriteSites = roleCan(role, 'site:write');
+  const sites = useSites(orgId, workspaceId, canReadSites);
+  const moveSite = useUpdateSite(orgId, workspaceId);
+  const [chosenStep, setChosenStep] = useState<OpenStep | null>(null);
   const [chosenSurfaceId, setChosenSurfaceId] = useState<string | null>(null);
+  const [selectedSiteId, setSelectedSiteId] = useState<string | null>(null);
+  // "Add on map": while on (sites step, writers), a click on the map is a position for the site form.
+  const [pickOnMap, setPickOnMap] = useState(false);
+  const [picked, setPicked] = useState<SitePick | null>(null);
+  // Text drawn beside sites on the map instead of their names, by site id (e.g. "#1" for a rank).
+  // The scoring panel sets it through `setSiteLabels` (its `onSiteLabels` prop) and clears it with {}.
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- used by the scoring panel's slot in step 3 below
+  const [siteLabels, setSiteLabels] = useState<Record<string, string>>({});
   const hasImported = files.data?.some((f) => f.status === 'imported');
 
-  // On arrival, open the next step to do (customers first, then the surface); after that the step
-  // only changes when the user picks one, so a finished import does not swap the report away.
+  // On arrival, open the next step to do (planners: the sites; others: customers first, then the
+  // surface); after that the step only changes when the user picks one, so a finished import does
+  // not swap the report away.
   useEffect(() => {
-    if (chosenStep === null && hasImported !== undefined) setChosenStep(hasImported ? 'surface' : 'customers');
-  }, [chosenStep, hasImported]);
+    if (chosenStep !== null) return;
+    if (role === 'planner') setChosenStep('sites');
+    else if (hasImported !== undefined) setChosenStep(hasImported ? 'surface' : 'customers');
+  }, [chosenStep, hasImported, role]);
 
   if (!workspace.data) return <Spinner label="Loading the workspace" className="flex justify-center p-16" />;
   const ws = workspace.data;
@@ -95,6 +97,20 @@ export default function WorkspaceRoute() {
   const shown = finished.find((s) => s.id === chosenSurfaceId) ?? finished[0] ?? null;
   const shownFile = shown ? (files.data ?? []).find((f) => f.id === shown.customerFileId) : undefined;
   const sources = imported.map((f) => ({ id: f.id, name: f.name, acceptedCount: f.acceptedCount - f.excludedCount, weightLabel: f.weightLabel }));
+  const siteList = sites.data ?? [];
+  const selectedSite = siteList.find((s) => s.id === selectedSiteId) ?? null;
+  const mapSites: MapSite[] = siteList.map((s) => ({ id: s.id, name: s.name, kind: s.kind, lon: s.lon, lat: s.lat, label: siteLabels[s.id] }));
+  const editingSites = step === 'sites' && canWriteSites;
+  const siteProps: SurfaceMapSiteProps = {
+    sites: canReadSites ? mapSites : undefined,
+    selectedSiteId,
+    onSiteSelect: setSelectedSiteId,
+    onMapClickAdd: editingSites && pickOnMap ? (p) => setPicked((last) => ({ ...p, seq: (last?.seq ?? 0) + 1 })) : undefined,
+    // Rounded to 1e-7° (about 1 cm): no false precision from the pointer.
+    onSiteMove: editingSites ? (id, p) => moveSite.mutate({ siteId: id, changes: { lon: Number(p.lon.toFixed(7)), lat: Number(p.lat.toFixed(7)) } }) : undefined,
+  };
+  // Without a surface the basemap still shows the sites, and gives writers somewhere to click.
+  const basemapOnly = !shown && (mapSites.length > 0 || editingSites);
 
   return (
     <div className="flex flex-col gap-6">
@@ -128,10 +144,10 @@ export default function WorkspaceRoute() {
         <Card className="p-2">
           <h2 className="px-3 pt-2 text-xs font-semibold tracking-wide text-ink-faint uppercase">Study outline</h2>
           <StudyOutline
-            states={{ customers: customersState(files.data), surface: surfaceState(surfaces.data) }}
+            states={{ customers: customersState(files.data), surface: surfaceState(surfaces.data), sites: sitesState(sites.data) }}
             activeKey={step}
             selectable={openSteps}
-            onSelect={(key) => setChosenStep(key as (typeof openSteps)[number])}
+            onSelect={(key) => setChosenStep(key as OpenStep)}
           />
         </Card>
         <section aria-label="Map">
@@ -142,12 +158,23 @@ export default function WorkspaceRoute() {
               customerFile={shownFile ? { id: shownFile.id, name: shownFile.name, weightKind: shownFile.weightKind ?? 'count', weightLabel: shownFile.weightLabel } : null}
               role={role}
               compareCandidates={finished}
+              {...siteProps}
             />
+          ) : basemapOnly ? (
+            <BasemapSiteMap note="No demand surface yet: the sites are shown on the basemap alone." {...siteProps} />
           ) : (
             <MapEmptyState />
           )}
         </section>
-        <Card>{shown ? <SurfaceInspector surface={shown} /> : <InspectorEmptyState />}</Card>
+        <Card>
+          {selectedSite ? (
+            <SiteInspector site={selectedSite} symbol={<SiteSymbol kind={selectedSite.kind} size={14} />} onClose={() => setSelectedSiteId(null)} />
+          ) : shown ? (
+            <SurfaceInspector surface={shown} />
+          ) : (
+            <InspectorEmptyState />
+          )}
+        </Card>
       </div>
 
       <Card>
@@ -161,7 +188,8 @@ export default function WorkspaceRoute() {
               <CustomerFilesStep orgId={orgId} workspaceId={workspaceId} canWrite={roleCan(role, 'customerFile:write')} />
             </div>
           </>
-        ) : (
+        ) : null}
+        {step === 'surface' ? (
           <>
             <CardHeader
               title="2 · Demand surface"
@@ -178,7 +206,44 @@ export default function WorkspaceRoute() {
               />
             </div>
           </>
-        )}
+        ) : null}
+        {step === 'sites' ? (
+          <>
+            <CardHeader
+              title="3 · Sites & scoring"
+              description="Place candidate sites, own stores and competitors, then score each candidate’s trade area against a demand surface."
+            />
+            <div className="flex flex-col gap-8 p-5">
+              <SitesStep
+                orgId={orgId}
+                workspaceId={workspaceId}
+                canRead={canReadSites}
+                canWrite={canWriteSites}
+                selectedId={selectedSiteId}
+                onSelect={setSelectedSiteId}
+                pickOnMap={pickOnMap}
+                onPickOnMapChange={setPickOnMap}
+                picked={picked}
+                symbol={(kind) => <SiteSymbol kind={kind} size={14} />}
+              />
+              {/* scoring panel */}
+            </div>
+          </>
+        ) : null}
+        {step === 'shortlist' ? (
+          <>
+            <CardHeader
+              title="4 · Shortlist"
+              description="Rank the candidates, keep the best with notes, and share the shortlist with the people who approve the lease."
+              actions={
+                <Link to={paths.org.shortlists.getHref(orgId)} className="text-sm font-medium text-accent hover:underline">
+                  All shortlists of the organization
+                </Link>
+              }
+            />
+            <div className="p-5">{/* shortlist step */}</div>
+          </>
+        ) : null}
       </Card>
 
       <Dialog open={dialog === 'edit'} onClose={() => setDialog(null)} title="Edit workspace">
