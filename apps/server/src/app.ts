@@ -9,6 +9,7 @@ import { RequestContext } from '@mikro-orm/core';
 import type { MikroORM } from '@mikro-orm/sqlite';
 import { pinoHttp } from 'pino-http';
 import { SurfaceRunner } from './jobs/surface-runner.js';
+import { ScoringRunner } from './jobs/scoring-runner.js';
 import type { AppConfig } from './config.js';
 import { ormInit } from './db.js';
 import { loggerCreate } from './logger.js';
@@ -31,6 +32,7 @@ import { SqliteSessionStore } from './modules/session/session-store.js';
 import { meRoutes } from './modules/user/user.routes.js';
 import { surfaceRoutes } from './modules/surface/surface.routes.js';
 import { siteRoutes } from './modules/site/site.routes.js';
+import { scoringRoutes } from './modules/scoring/scoring.routes.js';
 import { webStaticMount } from './web-static.js';
 
 const { version } = createRequire(import.meta.url)('../package.json') as { version: string };
@@ -46,6 +48,8 @@ export interface DemandscapeApp {
   servesWeb: boolean;
   /** Runs queued demand surfaces; `server.ts` (and tests that need runs) call `start()`. */
   surfaceRunner: SurfaceRunner;
+  /** Computes scoring runs, stability checks and candidate sets in worker threads (started by createApp). */
+  scoringRunner: ScoringRunner;
   close: () => Promise<void>;
 }
 
@@ -159,6 +163,9 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   const surfaceRunner = new SurfaceRunner(orm, { concurrency: config.runnerConcurrency, log, mailer, publicUrl: config.publicUrl });
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/surfaces', surfaceRoutes(em, surfaceRunner));
   app.use('/api/organizations/:orgId/workspaces/:workspaceId/sites', siteRoutes(em));
+  const scoringRunner = new ScoringRunner(orm, { concurrency: config.runnerConcurrency, log });
+  await scoringRunner.start();
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId', scoringRoutes(em, scoringRunner));
   app.use('/api/organizations/:orgId/billing', billingRoutes({ em, stripe, billing: config.billing, publicUrl: config.publicUrl }));
   app.use('/api/organizations/:orgId/invitations', invitationOrgRoutes({ em, mailer, publicUrl: config.publicUrl }));
   app.use('/api/invitations', invitationPublicRoutes({ em }));
@@ -174,9 +181,11 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
     sessionStore,
     servesWeb,
     surfaceRunner,
+    scoringRunner,
     close: async () => {
       clearInterval(pruneTimer);
       await surfaceRunner.stop();
+      await scoringRunner.stop();
       await customerFiles.imports.idle();
       mailer.close();
       await orm.close(true);

@@ -9,10 +9,12 @@ import { CustomerPointChunkSchema } from './modules/customer-file/customer-point
 import { MembershipSchema } from './modules/organization/membership.entity.js';
 import { OrganizationSchema } from './modules/organization/organization.entity.js';
 import { SiteSchema } from './modules/site/site.entity.js';
+import { ScoringRunSchema } from './modules/scoring/scoring-run.entity.js';
+import { ScoringSettingsSchema } from './modules/scoring/scoring-settings.entity.js';
 import { SessionSchema } from './modules/session/session.entity.js';
 import { SurfaceRasterSchema, SurfaceSchema } from './modules/surface/surface.entity.js';
 import { UserSchema } from './modules/user/user.entity.js';
 import { WorkspaceSchema } from './modules/workspace/workspace.entity.js';
 
 /** Every entity schema; new modules add theirs here (and a migration in src/migrations). */
-export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema, SiteSchema];
+export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema, SiteSchema, ScoringSettingsSchema, ScoringRunSchema];

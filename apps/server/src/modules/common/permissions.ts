@@ -22,6 +22,9 @@ export const PERMISSIONS = {
   // Executives read shortlists, not the sites list.
   'site.read': ['owner', 'analyst', 'planner'],
   'site.write': ['owner', 'planner'],
+  // Executives read rankings (aggregates only); owners and planners score.
+  'scoring.read': ROLES,
+  'scoring.write': ['owner', 'planner'],
   'billing.manage': ['owner'],
   'invitation.manage': ['owner'],
   'members.manage': ['owner'],
