@@ -24,6 +24,10 @@ vi.mock('../../../features/map/components/surface-map', () => ({
   },
 }));
 
+vi.mock('../../../features/map/components/basemap-site-map', () => ({
+  BasemapSiteMap: (props: { sites?: unknown[]; note?: string }) => <div role="img" aria-label={`Basemap with ${props.sites?.length ?? 0} sites`} />,
+}));
+
 const ws = '*/api/organizations/org_1/workspaces/wsp_1';
 const planner = { id: 'usr_planner', name: 'Orrin Castellow' };
 
@@ -95,6 +99,12 @@ describe('the read-only shortlist page', () => {
     expect(last.customerFile).toBeNull();
     expect(last.role).toBe('executive');
     expect(last.scope).toEqual({ orgId: 'org_1', workspaceId: 'wsp_1' });
+    expect(last.sites?.map((site) => [site.name, site.kind, site.label])).toEqual([
+      ['Quay Street corner', 'candidate', '1'],
+      ['Ropewalk Yard', 'candidate', '2'],
+      ['Larchloaf Harbour', 'own', undefined],
+      ['Crumbhall Bakery', 'competitor', undefined],
+    ]);
 
     expect(screen.queryByRole('link', { name: 'Edit in workspace' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Share|Rename|Delete|Edit/ })).not.toBeInTheDocument();
@@ -120,6 +130,15 @@ describe('the read-only shortlist page', () => {
     const edit = await screen.findByRole('link', { name: 'Edit in workspace' }, { timeout: 15_000 });
     expect(edit).toHaveAttribute('href', '/orgs/org_1/workspaces/wsp_1');
     await expect.poll(() => mapProps[mapProps.length - 1]?.customerFile?.id).toBe('cf_1');
+  }, 20_000);
+
+  it('keeps the numbers and shows the sites on the basemap when the version’s surface was deleted', async () => {
+    signedInAs('executive');
+    server.use(http.get(`${ws}/surfaces/srf_1`, () => HttpResponse.json({ error: { code: 'NOT_FOUND', message: 'Demand surface not found.' } }, { status: 404 })));
+    renderApp('/orgs/org_1/shortlists/shl_1');
+    expect(await screen.findByText('The demand surface “Harbour customers 2026” cannot be shown', {}, { timeout: 15_000 })).toBeInTheDocument();
+    expect(screen.getByRole('img', { name: 'Basemap with 4 sites' })).toBeInTheDocument();
+    expect(screen.getByRole('table', { name: 'Shortlisted sites' })).toBeInTheDocument();
   }, 20_000);
 
   it('answers an unknown shortlist with the not-found page', async () => {

@@ -1,8 +1,10 @@
 import { Alert, Card, CardHeader, Spinner } from '@demandscape/ui';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
 import { data, Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getCustomerFileQueryOptions } from '../../../features/customer-files/api/get-customer-file';
+import { BasemapSiteMap } from '../../../features/map/components/basemap-site-map';
 import { SurfaceMap } from '../../../features/map/components/surface-map';
 import { getOrgShortlistsQueryOptions, useOrgShortlists } from '../../../features/shortlists/api/get-org-shortlists';
 import { getShortlistQueryOptions, useShortlist } from '../../../features/shortlists/api/get-shortlist';
@@ -12,6 +14,7 @@ import { ShortlistRankedTable } from '../../../features/shortlists/components/sh
 import { ShortlistSiteNotes } from '../../../features/shortlists/components/shortlist-site-notes';
 import { ShortlistVersionLine } from '../../../features/shortlists/components/shortlist-version-line';
 import { VersionPicker } from '../../../features/shortlists/components/version-picker';
+import { shortlistMapSites } from '../../../features/shortlists/utils/shortlist-map-sites';
 import { getSurfaceQueryOptions } from '../../../features/surfaces/api/get-surface';
 import { errorMessage } from '../../../lib/api-error';
 import { roleCan } from '../../../lib/authorization';
@@ -62,6 +65,8 @@ export default function ShortlistRoute() {
   // Legend words come from the customer file's metadata; executives get no customer file at all.
   const showFile = role !== 'executive' && Boolean(surface.data?.customerFileId);
   const file = useQuery({ ...getCustomerFileQueryOptions(orgId, workspaceId, surface.data?.customerFileId ?? ''), enabled: showFile });
+  // Chosen candidates labelled with their order, plus the own stores and competitors they were scored against.
+  const sites = useMemo(() => (v ? shortlistMapSites(v) : []), [v]);
 
   if (list.isError || shortlist.isError) {
     return (
@@ -116,11 +121,15 @@ export default function ShortlistRoute() {
                   : null
               }
               role={role}
+              sites={sites}
             />
           ) : surface.isError ? (
-            <Alert tone="caution" title={`The demand surface “${v.surfaceName}” cannot be shown`}>
-              {errorMessage(surface.error)} The numbers below were saved with this version and stay valid for it.
-            </Alert>
+            <div className="flex flex-col gap-3">
+              <Alert tone="caution" title={`The demand surface “${v.surfaceName}” cannot be shown`}>
+                {errorMessage(surface.error)} The numbers below were saved with this version and stay valid for it.
+              </Alert>
+              <BasemapSiteMap sites={sites} note="The sites of this version on the basemap, without the demand surface." />
+            </div>
           ) : (
             <Spinner label="Loading the map" className="flex h-80 items-center justify-center" />
           )}

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ShortlistRun, ShortlistRunSummary } from '../run-types';
+import type { ScoringRunJson, ScoringRunSummaryJson } from '../../scoring/types';
 
 /**
  * The API path of a workspace's scoring runs.
@@ -13,21 +13,21 @@ export function scoringRunsPath(orgId: string, workspaceId: string): string {
   return `/organizations/${orgId}/workspaces/${workspaceId}/scoring-runs`;
 }
 
-// Under the scoring runs' key prefix, so the scoring step's refreshes reach these too; own last part,
-// because these queries keep only what the builder reads.
-const runsKey = (orgId: string, workspaceId: string) => ['organizations', orgId, 'workspaces', workspaceId, 'scoring-runs'] as const;
+// Under the scoring feature's run keys, so its refreshes (a new or deleted run) reach the builder too;
+// the last part keeps these entries apart from the scoring step's own.
+const runsKey = (orgId: string, workspaceId: string) => ['organizations', orgId, 'workspaces', workspaceId, 'scoring', 'runs'] as const;
 
 /**
  * Query options for the workspace's scoring runs (newest first), for choosing the ranking a shortlist comes from.
  * @param orgId the organization
  * @param workspaceId the workspace
- * @returns options keyed `[…, 'scoring-runs', 'shortlist-choice']`
+ * @returns options keyed `[…, 'scoring', 'runs', 'shortlist-choice']`
  * @example useQuery(getShortlistRunsQueryOptions(orgId, wsId))
  */
 export function getShortlistRunsQueryOptions(orgId: string, workspaceId: string) {
   return queryOptions({
     queryKey: [...runsKey(orgId, workspaceId), 'shortlist-choice'],
-    queryFn: async () => (await api.get<{ runs: ShortlistRunSummary[] }>(scoringRunsPath(orgId, workspaceId))).runs,
+    queryFn: async () => (await api.get<{ runs: ScoringRunSummaryJson[] }>(scoringRunsPath(orgId, workspaceId))).runs,
   });
 }
 
@@ -53,7 +53,7 @@ export function useShortlistRuns(orgId: string, workspaceId: string) {
 export function useShortlistRun(orgId: string, workspaceId: string, runId: string) {
   return useQuery({
     queryKey: [...runsKey(orgId, workspaceId), runId, 'shortlist-choice'],
-    queryFn: async () => (await api.get<{ run: ShortlistRun }>(`${scoringRunsPath(orgId, workspaceId)}/${runId}`)).run,
+    queryFn: async () => (await api.get<{ run: ScoringRunJson }>(`${scoringRunsPath(orgId, workspaceId)}/${runId}`)).run,
     enabled: runId !== '',
   });
 }

@@ -1,8 +1,8 @@
-import type { ShortlistRun } from '../run-types';
+import type { ScoringRunJson } from '../../scoring/types';
 import { demandText, shareText } from '../utils/score-text';
 
 export type RunRankingPickerProps = {
-  run: ShortlistRun;
+  run: Pick<ScoringRunJson, 'name' | 'weightLabel' | 'results'>;
   /** Site ids already on the shortlist. */
   chosenIds: ReadonlySet<string>;
   onToggle: (candidate: { siteId: string; name: string }) => void;

@@ -1,4 +1,4 @@
-import type { ShortlistRun, ShortlistRunCandidate, ShortlistRunSummary } from '../run-types';
+import type { CandidateScoreJson, ScoringRunJson, ScoringRunSummaryJson } from '../../scoring/types';
 import type { Shortlist, ShortlistItem, ShortlistSummary, ShortlistVersion } from '../types';
 
 const planner = { id: 'usr_planner', name: 'Orrin Castellow' };
@@ -147,7 +147,7 @@ export function createShortlist(overrides: Partial<Shortlist> = {}): Shortlist {
  * @returns the candidate
  * @example createRunCandidate({ siteId: 's2', rank: 2 })
  */
-export function createRunCandidate(overrides: Partial<ShortlistRunCandidate> = {}): ShortlistRunCandidate {
+export function createRunCandidate(overrides: Partial<CandidateScoreJson> = {}): CandidateScoreJson {
   return {
     siteId: 'site_quay',
     name: 'Quay Street corner',
@@ -155,8 +155,13 @@ export function createRunCandidate(overrides: Partial<ShortlistRunCandidate> = {
     value: 1840.4,
     captured: 2310.7,
     cannibalization: 470.3,
+    cannibalizedFrom: [{ siteId: 'site_own_1', name: 'Larchloaf Harbour', demand: 470.3 }],
     netNew: 1840.4,
     shareOfTotal: 0.0731,
+    rings: [
+      { radiusM: 1000, demand: 3120.5 },
+      { radiusM: 3000, demand: 11804 },
+    ],
     explanation: 'Ranks 1 of 3 by net new demand.',
     ...overrides,
   };
@@ -168,18 +173,22 @@ export function createRunCandidate(overrides: Partial<ShortlistRunCandidate> = {
  * @returns the run summary
  * @example createRunSummary({ status: 'running' })
  */
-export function createRunSummary(overrides: Partial<ShortlistRunSummary> = {}): ShortlistRunSummary {
+export function createRunSummary(overrides: Partial<ScoringRunSummaryJson> = {}): ScoringRunSummaryJson {
   return {
     id: 'run_1',
+    workspaceId: 'wsp_1',
     name: 'Huff α 1 β 2 on harbour spend',
     status: 'succeeded',
+    progress: 1,
+    error: null,
     surfaceId: 'srf_1',
     surfaceName: 'Harbour customers 2026',
+    settings: { ...createShortlistVersion().settings, measure: 'netNew' },
     weightLabel: 'customers',
     candidateCount: 3,
     createdAt: '2026-12-02T08:50:00.000Z',
     finishedAt: '2026-12-02T08:50:02.000Z',
-    settings: { measure: 'netNew' },
+    createdBy: planner,
     ...overrides,
   };
 }
@@ -190,17 +199,24 @@ export function createRunSummary(overrides: Partial<ShortlistRunSummary> = {}): 
  * @returns the run
  * @example createRun({ id: 'run_2' })
  */
-export function createRun(overrides: Partial<ShortlistRun> = {}): ShortlistRun {
+export function createRun(overrides: Partial<ScoringRunJson> = {}): ScoringRunJson {
   return {
     ...createRunSummary(),
+    sites: [],
     results: {
       totalDemand: 31_600,
+      ownToday: [{ siteId: 'site_own_1', name: 'Larchloaf Harbour', demand: 9100 }],
       candidates: [
         createRunCandidate(),
         createRunCandidate({ siteId: 'site_mill', name: 'Old Mill Lane', rank: 2, value: 1502, netNew: 1502, captured: 1700, cannibalization: 198, shareOfTotal: 0.0538 }),
         createRunCandidate({ siteId: 'site_ropewalk', name: 'Ropewalk Yard', rank: 3, value: 1204, netNew: 1204, captured: 1590, cannibalization: 386, shareOfTotal: 0.0503 }),
       ],
     },
+    stability: null,
+    sets: [],
+    warnings: [],
+    timings: null,
+    surface: { bandwidthM: 1200, kernel: 'quartic', cellSizeM: 75, projection: 'UTM zone 25N (EPSG:32625)' },
     ...overrides,
   };
 }
