@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import ExcelJS from 'exceljs';
 import { afterAll, describe, expect, it } from 'vitest';
-import { SITE_FILE_MAX_ROWS, siteFileRead } from './site-file-read.js';
+import { SITE_FILE_MAX_COLUMNS, SITE_FILE_MAX_ROWS, siteFileRead } from './site-file-read.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'ds-site-file-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -51,6 +51,8 @@ describe('siteFileRead', () => {
     await expect(siteFileRead(stored(''))).rejects.toMatchObject({ status: 400, code: 'EMPTY_FILE', message: expect.stringMatching(/one site per row/) });
     await expect(siteFileRead(stored(Buffer.from('%PDF-1.7\n…')))).rejects.toMatchObject({ status: 415, code: 'UNSUPPORTED_FILE_TYPE', message: expect.stringMatching(/a PDF document, not a sites table/) });
     await expect(siteFileRead(stored(Buffer.from([0x50, 0x4b, 0x03, 0x04, 1, 2, 3, 4])))).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/not a readable \.xlsx workbook/) });
+    const wide = await siteFileRead(stored('name,lon,lat\n' + 'x,'.repeat(SITE_FILE_MAX_COLUMNS) + 'y\n')).catch((e: unknown) => e);
+    expect(wide).toMatchObject({ code: 'TOO_MANY_COLUMNS', message: expect.stringMatching(/has 101 columns; a sites file may have at most 100/) });
     const header = 'name,kind,lon,lat,attractiveness\n';
     const atLimit = await siteFileRead(stored(header + 'S,own,-38.5,44.5,1\n'.repeat(SITE_FILE_MAX_ROWS)));
     expect(atLimit.rows).toHaveLength(SITE_FILE_MAX_ROWS);

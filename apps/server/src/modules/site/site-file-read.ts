@@ -5,9 +5,13 @@ import { csvDialectDetect } from '../customer-file/csv-dialect.js';
 import { fileSniff, textScan } from '../customer-file/file-sniff.js';
 import { rowsRead } from '../customer-file/row-reader.js';
 import { siteHeaderIs } from './site-columns.js';
+import { xlsxExpandedSizeCheck } from './xlsx-size-guard.js';
 
 /** Most sites one file may hold. */
 export const SITE_FILE_MAX_ROWS = 5000;
+
+/** Most columns one sites file may have (a sites table needs fewer than ten). */
+export const SITE_FILE_MAX_COLUMNS = 100;
 
 /** The table in a sites file: its columns and every non-blank data row as cell texts. */
 export interface SiteFileTable {
@@ -32,7 +36,7 @@ const tooMany = () =>
  * readers, and decides whether the first row is a header.
  * @param path - the stored upload (≤ 2 MB)
  * @returns the table
- * @throws AppError 400 EMPTY_FILE / TOO_MANY_ROWS, 415 UNSUPPORTED_FILE_TYPE
+ * @throws AppError 400 EMPTY_FILE / TOO_MANY_ROWS / TOO_MANY_COLUMNS / FILE_TOO_LARGE (workbook unpacking to > 64 MB), 415 UNSUPPORTED_FILE_TYPE
  * @example
  * const { columns, rows } = await siteFileRead('/tmp/ds-sites-…');
  */
@@ -42,6 +46,7 @@ export async function siteFileRead(path: string): Promise<SiteFileTable> {
   let delimiter: string | null = null;
   let decimalComma = false;
   let simpleLines = false;
+  if (format === 'xlsx') await xlsxExpandedSizeCheck(path);
   if (format === 'csv') {
     ({ encoding, simpleLines } = await textScan(path));
     ({ delimiter, decimalComma } = csvDialectDetect(await firstLines(path, encoding)));
@@ -66,6 +71,9 @@ export async function siteFileRead(path: string): Promise<SiteFileTable> {
   const rows = hasHeader ? all.slice(1) : all;
   if (rows.length > SITE_FILE_MAX_ROWS) throw tooMany();
   const width = Math.max(all[0].length, ...rows.map((r) => r.length));
+  if (width > SITE_FILE_MAX_COLUMNS) {
+    throw new AppError(400, 'TOO_MANY_COLUMNS', `The file has ${width} columns; a sites file may have at most ${SITE_FILE_MAX_COLUMNS}. Keep the columns for name, location, kind, attractiveness and notes.`, 'file');
+  }
   const columns = hasHeader ? columnsFromFirstRow([...all[0], ...Array<string>(width - all[0].length).fill('')]).columns : Array.from({ length: width }, (_, i) => `column ${i + 1}`);
   return { format, columns, hasHeader, decimalComma, rows, firstRow: hasHeader ? 2 : 1 };
 }
