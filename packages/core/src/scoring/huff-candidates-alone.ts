@@ -12,8 +12,8 @@ export interface HuffCandidatesAlone {
   cannibalization: Float64Array;
 }
 
-/** Per-candidate constants the run kernel needs. */
-interface CandidateTerms {
+/** Per-candidate constants the run kernel needs (from huffCandidateTerms). */
+export interface CandidateTerms {
   a: number;
   x: number;
   y: number;
@@ -25,6 +25,8 @@ interface CandidateTerms {
  *
  * @param runs the grid's runs (4 integers each)
  * @returns tile boundaries in run units, first 0, last the number of runs
+ * @example
+ * const tiles = huffTiles(grid.cells.runs); // [0, 17, 34, …]
  */
 export function huffTiles(runs: Int32Array): number[] {
   const bounds = [0];
@@ -47,6 +49,8 @@ export function huffTiles(runs: Int32Array): number[] {
  * @param grid today's network
  * @param candidates the sites under test
  * @returns one entry per candidate
+ * @example
+ * const terms = huffCandidateTerms(grid, candidates);
  */
 export function huffCandidateTerms(grid: HuffGrid, candidates: readonly Site[]): CandidateTerms[] {
   const { whole, quarters, halfBeta } = grid.power;
@@ -64,14 +68,23 @@ export function huffCandidateTerms(grid: HuffGrid, candidates: readonly Site[]):
  * Σ W·P and Σ (W·O)·P over one tile of runs for one candidate, P = A/(A + S·d^β), added into
  * out[0] and out[1]. With β = 2 and rows at least the minimum distance away, four cells share
  * one division: with D_i = A + S_i d_i², P_1 = A·D₂D₃D₄ / (D₁D₂D₃D₄) and so on.
+ *
+ * @param grid today's network
+ * @param r0 first run of the tile
+ * @param r1 end run of the tile (exclusive)
+ * @param t the candidate's constants (huffCandidateTerms)
+ * @param out two sums, added to
+ * @returns nothing
+ * @example
+ * huffTileShares(grid, tiles[0], tiles[1], terms[0], acc);
  */
-export function huffTileShares(grid: HuffGrid, r0: number, r1: number, t: CandidateTerms, out: Float64Array, shares?: Float64Array): void {
+export function huffTileShares(grid: HuffGrid, r0: number, r1: number, t: CandidateTerms, out: Float64Array): void {
   const { denominator: S, ownDemand: O, colXKm: colX, rowYKm, minDistanceSqKm: minD, beta } = grid;
   const { whole, quarters, halfBeta } = grid.power;
   const W = grid.cells.demand;
   const runs = grid.cells.runs;
   const { a, x, y } = t;
-  const fast = beta === 2 && t.fourWay && shares === undefined;
+  const fast = beta === 2 && t.fourWay;
   let cap = 0;
   let can = 0;
   for (let r = 4 * r0; r < 4 * r1; r += 4) {
@@ -109,7 +122,6 @@ export function huffTileShares(grid: HuffGrid, r0: number, r1: number, t: Candid
       const share = a / (a + S[p] * (beta === 2 ? e : (quarters < 0 ? Math.exp(halfBeta * Math.log(e)) : squaredDistancePower(e, whole, quarters, halfBeta))));
       cap += W[p] * share;
       can += O[p] * share;
-      if (shares) shares[p - runs[4 * r0 + 3]] = share;
     }
   }
   out[0] += cap;

@@ -82,7 +82,16 @@ export function huffTermsInto(grid: TermGrid, site: Site, out: Float64Array, add
   }
 }
 
-/** Largest squared distance (km²) from a point to the box [x0, y0, x1, y1]. */
+/**
+ * Largest squared distance (km²) from a point to the box [x0, y0, x1, y1].
+ *
+ * @param box the box in km
+ * @param x point x in km
+ * @param y point y in km
+ * @returns the squared distance to the farthest corner
+ * @example
+ * boxFarthestSq([0, 0, 3, 4], 0, 0); // 25
+ */
 export function boxFarthestSq(box: readonly [number, number, number, number], x: number, y: number): number {
   const dx = Math.max(Math.abs(x - box[0]), Math.abs(x - box[2]));
   const dy = Math.max(Math.abs(y - box[1]), Math.abs(y - box[3]));
