@@ -9,6 +9,7 @@ import { BasemapSiteMap } from '../../../features/map/components/basemap-site-ma
 import { SiteSymbol } from '../../../features/map/components/site-legend';
 import { SurfaceMap, type SurfaceMapSiteProps } from '../../../features/map/components/surface-map';
 import type { MapSite } from '../../../features/map/types';
+import { ScoringStep } from '../../../features/scoring/components/scoring-step';
 import { getSitesQueryOptions, useSites } from '../../../features/sites/api/get-sites';
 import { useUpdateSite } from '../../../features/sites/api/update-site';
 import { SiteInspector } from '../../../features/sites/components/site-inspector';
@@ -75,7 +76,6 @@ export default function WorkspaceRoute() {
   const [picked, setPicked] = useState<SitePick | null>(null);
   // Text drawn beside sites on the map instead of their names, by site id (e.g. "#1" for a rank).
   // The scoring panel sets it through `setSiteLabels` (its `onSiteLabels` prop) and clears it with {}.
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- used by the scoring panel's slot in step 3 below
   const [siteLabels, setSiteLabels] = useState<Record<string, string>>({});
   const hasImported = files.data?.some((f) => f.status === 'imported');
 
@@ -226,7 +226,13 @@ export default function WorkspaceRoute() {
                 picked={picked}
                 symbol={(kind) => <SiteSymbol kind={kind} size={14} />}
               />
-              {/* scoring panel */}
+              <ScoringStep
+                orgId={orgId}
+                workspaceId={workspaceId}
+                surfaces={finished.map((f) => ({ id: f.id, name: f.name }))}
+                canWrite={roleCan(role, 'scoring:write')}
+                onSiteLabels={setSiteLabels}
+              />
             </div>
           </>
         ) : null}
