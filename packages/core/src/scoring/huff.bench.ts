@@ -19,7 +19,7 @@ import { huffBaseCaptured, huffGrid } from './huff-grid.js';
 import { ringDemands } from './ring-demand.js';
 import type { ScoringSurface } from './scoring-surface.js';
 import { siteScores, siteScoresFromParts, type SiteScores } from './site-scores.js';
-import { siteScoresPart, type SiteScoreOptions, type SiteScoresPart } from './site-scores-part.js';
+import { siteScoresPart, siteScoresRowRanges, type SiteScoreOptions, type SiteScoresPart } from './site-scores-part.js';
 
 const quick = process.argv.includes('--quick');
 const side = quick ? 500 : 1000;
@@ -89,9 +89,7 @@ function workerStart(values: Float64Array): Promise<Worker> {
 
 /** Scores on two worker threads, one per half of the rows. */
 async function siteScoresTwoThreads(workers: Worker[], surface: ScoringSurface, sites: Site[], nCandidates: number, options: SiteScoreOptions): Promise<SiteScores> {
-  const h = surface.spec.height;
-  const half = Math.floor(h / 2);
-  const ranges: Array<[number, number]> = [[0, half], [half, h]]; // prettier-ignore
+  const ranges = siteScoresRowRanges(surface.spec.height, workers.length);
   const parts = await Promise.all(
     workers.map(
       (w, k) =>

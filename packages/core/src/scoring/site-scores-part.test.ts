@@ -4,7 +4,7 @@ import type { Site } from '../sites/site.js';
 import type { GridSpec } from '../types.js';
 import type { ScoringSurface } from './scoring-surface.js';
 import { siteScores, siteScoresFromParts } from './site-scores.js';
-import { siteScoresPart } from './site-scores-part.js';
+import { siteScoresPart, siteScoresRowRanges } from './site-scores-part.js';
 
 function fixture(): { surface: ScoringSurface; sites: Site[] } {
   const rnd = randomSeeded(42).uniform;
@@ -40,6 +40,13 @@ describe('siteScoresPart and siteScoresFromParts', () => {
       expect(joined.candidates[0].captured).toBeGreaterThan(0);
     });
   }
+
+  it('splits rows into nearly equal contiguous ranges', () => {
+    expect(siteScoresRowRanges(1000, 2)).toEqual([[0, 500], [500, 1000]]);
+    expect(siteScoresRowRanges(7, 3)).toEqual([[0, 3], [3, 5], [5, 7]]);
+    expect(siteScoresRowRanges(1, 2)).toEqual([[0, 1], [1, 1]]);
+    expect(() => siteScoresRowRanges(10, 0)).toThrow(/whole number ≥ 1 \(got 0\)/);
+  });
 
   it('names missing, doubled and mismatched row ranges', () => {
     const { surface, sites } = fixture();

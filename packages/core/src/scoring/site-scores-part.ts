@@ -114,3 +114,29 @@ export function siteScoresPart(surface: ScoringSurface, sites: readonly Site[], 
     beta: grid.beta,
   };
 }
+
+/**
+ * Splits the grid rows into `count` contiguous ranges of nearly equal size (the first ranges
+ * take one row more when it does not divide evenly), e.g. one per worker thread.
+ *
+ * @param height grid rows (surface.spec.height)
+ * @param count number of ranges, a whole number ≥ 1 (more than height gives empty ranges)
+ * @returns the ranges [rowStart, rowEnd) in order, covering 0 … height once
+ * @example
+ * siteScoresRowRanges(1000, 2); // [[0, 500], [500, 1000]]
+ */
+export function siteScoresRowRanges(height: number, count: number): Array<[number, number]> {
+  if (!Number.isInteger(count) || count < 1) {
+    throw new CoreError('INVALID_ARGUMENT', `the number of row ranges must be a whole number ≥ 1 (got ${count})`, 'count');
+  }
+  const base = Math.floor(height / count);
+  const extra = height % count;
+  const ranges: Array<[number, number]> = [];
+  let start = 0;
+  for (let k = 0; k < count; k++) {
+    const end = start + base + (k < extra ? 1 : 0);
+    ranges.push([start, end]);
+    start = end;
+  }
+  return ranges;
+}
