@@ -7,10 +7,13 @@ import { shortlistsPath } from './get-shortlists';
 import { shortlistsRefresh } from './refresh-shortlists';
 
 export const shareShortlistSchema = z.object({
-  message: z.string().trim().max(1000, 'Keep the message under 1,000 characters.'),
+  message: z.string().trim().max(2000, 'Keep the message under 2,000 characters.'),
 });
 
 export type ShareShortlistInput = z.infer<typeof shareShortlistSchema>;
+
+/** The answer to a share: everyone the shortlist has been shared with so far (with when), and whom the mail did not reach. */
+export type ShareShortlistResult = { sharedWith: ShortlistRecipient[]; failed?: Array<{ userId: string; name: string }> };
 
 /**
  * Shares a shortlist: every executive of the organization (or the users given) gets an e-mail with a link to its page.
@@ -18,12 +21,11 @@ export type ShareShortlistInput = z.infer<typeof shareShortlistSchema>;
  * @param workspaceId the workspace
  * @param shortlistId the shortlist
  * @param body optional message and recipients
- * @returns who received it, and when
- * @example const sent = await shareShortlist(orgId, wsId, id, { message: 'For Thursday' });
+ * @returns who has received it and when (this send and earlier ones), and whom the e-mail did not reach
+ * @example const { sharedWith } = await shareShortlist(orgId, wsId, id, { message: 'For Thursday' });
  */
-export async function shareShortlist(orgId: string, workspaceId: string, shortlistId: string, body: ShortlistShareBody): Promise<ShortlistRecipient[]> {
-  const res = await api.post<{ sharedWith: ShortlistRecipient[] }>(`${shortlistsPath(orgId, workspaceId)}/${shortlistId}/share`, body);
-  return res.sharedWith;
+export async function shareShortlist(orgId: string, workspaceId: string, shortlistId: string, body: ShortlistShareBody): Promise<ShareShortlistResult> {
+  return api.post<ShareShortlistResult>(`${shortlistsPath(orgId, workspaceId)}/${shortlistId}/share`, body);
 }
 
 /**
@@ -35,7 +37,7 @@ export async function shareShortlist(orgId: string, workspaceId: string, shortli
  * @returns the mutation
  * @example useShareShortlist(orgId, wsId, id).mutate({ message })
  */
-export function useShareShortlist(orgId: string, workspaceId: string, shortlistId: string, config: MutationConfig<ShortlistShareBody, ShortlistRecipient[]> = {}) {
+export function useShareShortlist(orgId: string, workspaceId: string, shortlistId: string, config: MutationConfig<ShortlistShareBody, ShareShortlistResult> = {}) {
   const queryClient = useQueryClient();
   return useMutation({
     meta: { errorsShownInline: true },

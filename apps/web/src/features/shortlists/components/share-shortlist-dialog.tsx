@@ -27,6 +27,13 @@ function RecipientList({ recipients, label }: { recipients: ShortlistRecipient[]
   );
 }
 
+/** "Sent to 2 people": those whose share time is this send's (the list also holds earlier shares). */
+function sentTitle(recipients: ShortlistRecipient[]): string {
+  const latest = recipients.reduce((max, r) => (r.sharedAt > max ? r.sharedAt : max), '');
+  const now = recipients.filter((r) => r.sharedAt === latest).length;
+  return `Sent to ${now} ${now === 1 ? 'person' : 'people'}`;
+}
+
 /**
  * "Share with executives": an optional message, then every executive of the organization gets an e-mail
  * with a link to the shortlist's page. Shows who received it and when, or the server's reason it could not be sent.
@@ -52,9 +59,14 @@ export function ShareShortlistDialog({ orgId, shortlist, open, onClose }: ShareS
     >
       {share.isSuccess ? (
         <div className="flex flex-col gap-3">
-          <Alert tone="success" title={`Shared with ${share.data.length} ${share.data.length === 1 ? 'person' : 'people'}`}>
-            <RecipientList recipients={share.data} label="Sent to" />
+          <Alert tone="success" title={sentTitle(share.data.sharedWith)}>
+            <RecipientList recipients={share.data.sharedWith} label="Sent to" />
           </Alert>
+          {share.data.failed?.length ? (
+            <Alert tone="caution" title="Not every e-mail went out">
+              No e-mail reached {share.data.failed.map((f) => f.name).join(', ')}. Share again later to retry.
+            </Alert>
+          ) : null}
           <Button className="self-end" onClick={close}>
             Done
           </Button>
@@ -73,7 +85,7 @@ export function ShareShortlistDialog({ orgId, shortlist, open, onClose }: ShareS
             label="Message (optional)"
             hint="Added to the e-mail above the link, e.g. what you want decided and by when."
             rows={3}
-            maxLength={1000}
+            maxLength={2000}
             value={message}
             onChange={(e) => setMessage(e.target.value)}
           />
