@@ -10,6 +10,7 @@ import { SiteSymbol } from '../../../features/map/components/site-legend';
 import { SurfaceMap, type SurfaceMapSiteProps } from '../../../features/map/components/surface-map';
 import type { MapSite } from '../../../features/map/types';
 import { ScoringStep } from '../../../features/scoring/components/scoring-step';
+import { ShortlistStep } from '../../../features/shortlists/components/shortlist-step';
 import { getSitesQueryOptions, useSites } from '../../../features/sites/api/get-sites';
 import { useUpdateSite } from '../../../features/sites/api/update-site';
 import { SiteInspector } from '../../../features/sites/components/site-inspector';
@@ -247,7 +248,9 @@ export default function WorkspaceRoute() {
                 </Link>
               }
             />
-            <div className="p-5">{/* shortlist step */}</div>
+            <div className="p-5">
+              <ShortlistStep orgId={orgId} workspaceId={workspaceId} canWrite={roleCan(role, 'shortlist:write')} />
+            </div>
           </>
         ) : null}
       </Card>
