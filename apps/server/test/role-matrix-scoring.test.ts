@@ -73,7 +73,7 @@ describe('role matrix: scoring', { timeout: 240_000 }, () => {
     await owner.client.post(`${base}/sites`, { kind: 'own', name: 'Harbour Row', ...quillportAt(0, 0), attractiveness: 100 }).expect(201);
     ids = { orgId, wsId, fileId, surfaceId, runId: '', c1, c2 };
     ids.runId = await runSucceeded();
-  });
+  }, 240_000);
   afterAll(() => ds.close());
 
   async function runSucceeded(): Promise<string> {

@@ -27,7 +27,7 @@ describe('scoring runs: settings, Huff scores, ranking, snapshots, failures', { 
     base = `/api/organizations/${orgId}/workspaces/${wsId}`;
     surfaceId = await surfaceStored(ds, ids, points, 'succeeded');
     for (const s of SCORING_SITES) siteIds[s.name] = (await planner.post(`${base}/sites`, s).expect(201)).body.site.id;
-  });
+  }, 240_000);
   afterAll(() => ds.close());
 
   const runPath = (id: string): string => `${base}/scoring-runs/${id}`;
@@ -55,6 +55,8 @@ describe('scoring runs: settings, Huff scores, ranking, snapshots, failures', { 
       [{ ...ok, measure: 'ring:3' }, 'measure', /ring:0 … ring:2/],
       [{ ...ok, measure: 'footfall' }, 'measure', /netNew, captured/],
       [{ ...ok, radiusUnit: 'ft' }, 'radiusUnit', /km or mi/],
+      [{ ...ok, minDistanceM: 0 }, 'minDistanceM', /at least 1 m/],
+      [{ ...ok, minDistanceM: 6000 }, 'minDistanceM', /at most 5,000 m/],
     ];
     for (const [body, field, message] of cases) {
       const res = await put(`${base}/scoring-settings`, body).expect(400);
@@ -103,6 +105,31 @@ describe('scoring runs: settings, Huff scores, ranking, snapshots, failures', { 
     const list = (await planner.get(`${base}/scoring-runs`).expect(200)).body.runs;
     expect(list[0]).toMatchObject({ id: run.id, status: 'succeeded', candidateCount: 4, surfaceName: 'Stored succeeded' });
     expect(list[0].results).toBeUndefined();
+  });
+
+  it('uses the saved α, β, minimum distance and ring measure, as core does with the same options', async () => {
+    await put(`${base}/scoring-settings`, { alpha: 0.5, beta: 1.5, radii: [0.5, 2], radiusUnit: 'mi', measure: 'ring:1', minDistanceM: 400 }).expect(200);
+    const id = (await planner.post(`${base}/scoring-runs`, { surfaceId }).expect(202)).body.run.id;
+    const run = await scoringRunWait(planner, runPath(id), (r) => r.status === 'succeeded' || r.status === 'failed');
+    expect(run.status).toBe('succeeded');
+    expect(run.settings).toMatchObject({ alpha: 0.5, beta: 1.5, minDistanceM: 400, measure: 'ring:1' });
+    expect(run.settings.radiiM).toEqual([804.672, 3218.688]);
+    const { surface, project } = await storedScoringSurface(ds, surfaceId);
+    const sites = SCORING_SITES.map((s) => project(siteIds[s.name], s.kind, s.lon, s.lat, s.attractiveness));
+    const options = { alpha: 0.5, beta: 1.5, radii: [804.672, 3218.688], minDistanceM: 400 };
+    const direct = siteScores(surface, sites, options);
+    const ranking = siteRanking(direct.candidates, { ringRadius: 3218.688 });
+    expect(run.results.candidates.map((c: { siteId: string }) => c.siteId)).toEqual(ranking.map((r) => r.id));
+    for (const c of run.results.candidates) {
+      const d = direct.candidates.find((x) => x.id === c.siteId)!;
+      expect(c.captured).toBeCloseTo(d.captured, 6);
+      expect(c.value).toBeCloseTo(d.rings[1].demand, 6);
+      expect(c.explanation).toMatch(/by demand within 2 mi \([\d,.]+ visits per year\)\.$/);
+    }
+    // The default minimum distance (half a cell) gives other numbers: the option reached the engine.
+    const halfCell = siteScores(surface, sites, { ...options, minDistanceM: null });
+    expect(halfCell.candidates[0].captured).not.toBeCloseTo(direct.candidates[0].captured, 3);
+    await put(`${base}/scoring-settings`, { alpha: 1, beta: 2, radii: [1, 2, 4], radiusUnit: 'km', measure: 'netNew', minDistanceM: null }).expect(200);
   });
 
   it('one candidate alone with no stores captures all the demand on the surface (closed form)', async () => {

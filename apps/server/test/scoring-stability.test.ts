@@ -25,7 +25,7 @@ describe('scoring runs: rank stability across bandwidths', { timeout: 180_000 },
     base = `/api/organizations/${orgId}/workspaces/${wsId}`;
     surfaceId = await surfaceStored(ds, ids, points, 'succeeded');
     for (const s of SCORING_SITES) siteIds[s.name] = (await owner.post(`${base}/sites`, s).expect(201)).body.site.id;
-  });
+  }, 240_000);
   afterAll(() => ds.close());
 
   const runPath = (id: string): string => `${base}/scoring-runs/${id}`;

@@ -117,7 +117,7 @@ export function scoringCompute(input: ScoringComputeInput, onProgress?: (fractio
   const warnings = scoringWarnings(input.sites, planar, input.grid);
   lap('prepare');
   const { settings } = input;
-  const scores = siteScores(surface, planar, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM, onProgress });
+  const scores = siteScores(surface, planar, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM, minDistanceM: settings.minDistanceM, onProgress });
   lap('huff');
   const ranking = siteRanking(scores.candidates, rankMeasureOf(settings.measure, settings.radiiM));
   lap('rank');

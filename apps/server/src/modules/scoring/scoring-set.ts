@@ -18,7 +18,7 @@ export function scoringSetCompute(input: ScoringComputeInput, siteIds: readonly 
   const surface = scoringSurfaceFromRaster(input.raster, input.grid);
   const sites = runSitesProjected(input.sites, input.projection);
   const { settings } = input;
-  const r = siteSetScore(surface, sites, siteIds, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM });
+  const r = siteSetScore(surface, sites, siteIds, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM, minDistanceM: settings.minDistanceM });
   const nameOf = new Map(input.sites.map((s) => [s.siteId, s.name]));
   return {
     siteIds: [...siteIds],

@@ -87,7 +87,7 @@ export async function scoringSettingsSave(em: EntityManager, scope: ScoringScope
     organizationId: scope.organizationId,
     actor,
     target: { type: 'workspace', id: scope.workspaceId },
-    details: { workspaceId: scope.workspaceId, alpha: input.alpha, beta: input.beta, radii: input.radii, radiusUnit: input.radiusUnit, measure: input.measure },
+    details: { workspaceId: scope.workspaceId, alpha: input.alpha, beta: input.beta, radii: input.radii, radiusUnit: input.radiusUnit, measure: input.measure, minDistanceM: input.minDistanceM },
   });
   await em.flush();
   return scoringSettingsGet(em, scope);

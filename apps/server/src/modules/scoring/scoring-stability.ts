@@ -50,6 +50,7 @@ export function scoringStabilityCompute(input: StabilityComputeInput): Stability
     alpha: settings.alpha,
     beta: settings.beta,
     radii: settings.radiiM,
+    minDistanceM: settings.minDistanceM,
     measure: rankMeasureOf(settings.measure, settings.radiiM),
   });
   const nameOf = new Map(input.sites.map((s) => [s.siteId, s.name]));

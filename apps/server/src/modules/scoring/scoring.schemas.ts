@@ -20,7 +20,12 @@ export const scoringSettingsInputSchema = z
     measure: z
       .string({ message: MEASURE_MESSAGE })
       .refine((m) => (MEASURES as readonly string[]).includes(m) || /^ring:\d+$/.test(m), { message: MEASURE_MESSAGE }),
-    minDistanceM: z.null({ message: 'minDistanceM must be null: the engine keeps every demand cell at least half a cell from a store' }).default(null),
+    minDistanceM: z
+      .number({ message: 'minDistanceM must be a number of metres, or null for half a cell' })
+      .min(1, 'minDistanceM must be at least 1 m (or null for half a cell)')
+      .max(5000, 'minDistanceM must be at most 5,000 m (or null for half a cell)')
+      .nullable()
+      .default(null),
   })
   .superRefine((v, ctx) => {
     v.radii.forEach((r, k) => {
