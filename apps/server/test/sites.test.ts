@@ -177,7 +177,8 @@ describe('sites import (CSV and XLSX, with column mapping)', () => {
     expect(noKind.body.error).toMatchObject({ code: 'VALIDATION_FAILED', field: 'mapping.kind', message: expect.stringMatching(/or send defaultKind/) });
     expect((await upload(csv, { defaultKind: 'candidate' }).expect(201)).body).toEqual({ imported: 2, emptyRows: 0 });
     const mill = (await owner.get(`${base}?kind=candidate`).expect(200)).body.sites.find((s: { name: string }) => s.name === 'Mill Lane');
-    expect(mill).toMatchObject({ lon: -38.47, lat: 44.53, attractiveness: 140, attractivenessLabel: 'Floor area (m²)', notes: 'near the tram stop' });
+    expect(mill).toMatchObject({ lon: -38.47, lat: 44.53, attractiveness: 140, attractivenessLabel: 'Floor area (m²)', notes: 'near the tram stop', createdBy: { name: 'Maren Larchwood' } });
+    expect(Date.parse(mill.createdAt)).toBeGreaterThan(Date.now() - 60_000);
   });
 
   it('imports an XLSX workbook (formula cells by their saved values) and counts rows left empty', async () => {

@@ -11,7 +11,7 @@ import { SITE_MAPPING_FIELDS, SITE_REQUIRED_FIELDS, siteColumnGuess, siteMapping
 import { siteFileRead, type SiteFileTable } from './site-file-read.js';
 import { siteMappingCheck, siteRowsParse, type SiteRowError } from './site-rows.js';
 import type { SiteImportFields } from './site.schemas.js';
-import { siteAdd, siteWorkspaceCheck, type SiteScope } from './site.service.js';
+import { siteInsertMany, siteWorkspaceCheck, type SiteScope } from './site.service.js';
 
 /** Largest sites file accepted (5,000 rows fit easily). */
 export const SITE_FILE_MAX_BYTES = 2 * 1024 * 1024;
@@ -140,14 +140,15 @@ export async function siteImport(em: EntityManager, scope: SiteScope, actor: Use
   const { sites, errors, emptyRows } = siteRowsParse(table, options);
   if (errors.length > 0) throw new SiteRowsInvalidError(errors);
   if (sites.length === 0) throw new AppError(400, 'EMPTY_FILE', `The file has no sites${emptyRows > 0 ? ` (${emptyRows} empty rows skipped)` : ''}; put one site per row below the header.`, 'file');
-  for (const input of sites) siteAdd(em, scope, actor, input);
-  auditRecord(em, {
-    action: 'site.import',
-    organizationId: scope.organizationId,
-    actor,
-    target: { type: 'workspace', id: scope.workspaceId },
-    details: { count: sites.length, format: table.format, emptyRows },
+  await em.transactional(async (tx) => {
+    await siteInsertMany(tx, scope, actor, sites);
+    auditRecord(tx, {
+      action: 'site.import',
+      organizationId: scope.organizationId,
+      actor,
+      target: { type: 'workspace', id: scope.workspaceId },
+      details: { count: sites.length, format: table.format, emptyRows },
+    });
   });
-  await em.flush();
   return { imported: sites.length, emptyRows };
 }

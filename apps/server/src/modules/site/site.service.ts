@@ -119,6 +119,38 @@ export function siteAdd(em: EntityManager, scope: SiteScope, actor: User, input:
 }
 
 /**
+ * Inserts many validated sites in one statement batch, without the unit of work (an import of
+ * 5,000 sites would otherwise track 5,000 entities). Call inside a transaction with the audit event.
+ * @param em - entity manager (a transaction's)
+ * @param scope - organization and workspace (checked by the caller)
+ * @param actor - creator
+ * @param inputs - validated fields
+ * @returns nothing
+ * @example
+ * await em.transactional((tx) => siteInsertMany(tx, scope, user, sites));
+ */
+export async function siteInsertMany(em: EntityManager, scope: SiteScope, actor: User, inputs: SiteCreateInput[]): Promise<void> {
+  const now = new Date();
+  const rows = inputs.map((input) => ({
+    id: entityId(),
+    organization: scope.organizationId,
+    workspace: scope.workspaceId,
+    kind: input.kind,
+    name: input.name,
+    lon: input.lon,
+    lat: input.lat,
+    attractiveness: input.attractiveness,
+    attractivenessLabel: input.attractivenessLabel ?? '',
+    notes: input.notes ?? '',
+    createdBy: actor.id,
+    createdAt: now,
+    updatedAt: now,
+  }));
+  // SQLite allows 32,766 bound values per statement; 13 columns × 1,000 rows stays well below.
+  for (let i = 0; i < rows.length; i += 1000) await em.insertMany(SiteSchema, rows.slice(i, i + 1000) as unknown as Site[]);
+}
+
+/**
  * Creates a site and records `site.create`.
  * @param em - entity manager
  * @param scope - organization and workspace
