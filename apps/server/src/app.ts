@@ -33,6 +33,8 @@ import { meRoutes } from './modules/user/user.routes.js';
 import { surfaceRoutes } from './modules/surface/surface.routes.js';
 import { siteRoutes } from './modules/site/site.routes.js';
 import { scoringRoutes } from './modules/scoring/scoring.routes.js';
+import { reportRunRoutes } from './modules/report/report.routes.js';
+import { shortlistOrgRoutes, shortlistRoutes } from './modules/shortlist/shortlist.routes.js';
 import { webStaticMount } from './web-static.js';
 
 const { version } = createRequire(import.meta.url)('../package.json') as { version: string };
@@ -166,6 +168,9 @@ export async function createApp(config: AppConfig): Promise<DemandscapeApp> {
   const scoringRunner = new ScoringRunner(orm, { concurrency: config.runnerConcurrency, log });
   await scoringRunner.start();
   app.use('/api/organizations/:orgId/workspaces/:workspaceId', scoringRoutes(em, scoringRunner));
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId/scoring-runs', reportRunRoutes(em));
+  app.use('/api/organizations/:orgId/workspaces/:workspaceId/shortlists', shortlistRoutes({ em, mailer, publicUrl: config.publicUrl }));
+  app.use('/api/organizations/:orgId/shortlists', shortlistOrgRoutes(em));
   app.use('/api/organizations/:orgId/billing', billingRoutes({ em, stripe, billing: config.billing, publicUrl: config.publicUrl }));
   app.use('/api/organizations/:orgId/invitations', invitationOrgRoutes({ em, mailer, publicUrl: config.publicUrl }));
   app.use('/api/invitations', invitationPublicRoutes({ em }));

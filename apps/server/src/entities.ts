@@ -12,9 +12,10 @@ import { SiteSchema } from './modules/site/site.entity.js';
 import { ScoringRunSchema } from './modules/scoring/scoring-run.entity.js';
 import { ScoringSettingsSchema } from './modules/scoring/scoring-settings.entity.js';
 import { SessionSchema } from './modules/session/session.entity.js';
+import { ShortlistSchema, ShortlistVersionSchema } from './modules/shortlist/shortlist.entity.js';
 import { SurfaceRasterSchema, SurfaceSchema } from './modules/surface/surface.entity.js';
 import { UserSchema } from './modules/user/user.entity.js';
 import { WorkspaceSchema } from './modules/workspace/workspace.entity.js';
 
 /** Every entity schema; new modules add theirs here (and a migration in src/migrations). */
-export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema, SiteSchema, ScoringSettingsSchema, ScoringRunSchema];
+export const entities = [UserSchema, OrganizationSchema, MembershipSchema, WorkspaceSchema, AuditEventSchema, SessionSchema, AuthTokenSchema, CustomerFileSchema, CustomerPointChunkSchema, BillingAccountSchema, CreditEntrySchema, BillingReceiptSchema, BillingWebhookEventSchema, InvitationSchema, SurfaceSchema, SurfaceRasterSchema, SiteSchema, ScoringSettingsSchema, ScoringRunSchema, ShortlistSchema, ShortlistVersionSchema];

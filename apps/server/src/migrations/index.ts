@@ -5,6 +5,7 @@ import { Migration20261202000000CustomerFiles } from './2026-12-02-customer-file
 import { Migration20261202000100Surfaces } from './2026-12-02-surfaces.js';
 import { Migration20261202000200Sites } from './2026-12-02-sites.js';
 import { Migration20261202000300Scoring } from './2026-12-02-scoring.js';
+import { Migration20261202000400Shortlists } from './2026-12-02-shortlists.js';
 
 /** Checked-in migrations in order; listed explicitly so built and source runs find the same set. */
 export const migrationsList: MigrationObject[] = [
@@ -14,4 +15,5 @@ export const migrationsList: MigrationObject[] = [
   { name: '2026-12-02-surfaces', class: Migration20261202000100Surfaces },
   { name: '2026-12-02-sites', class: Migration20261202000200Sites },
   { name: '2026-12-02-scoring', class: Migration20261202000300Scoring },
+  { name: '2026-12-02-shortlists', class: Migration20261202000400Shortlists },
 ];

@@ -25,6 +25,9 @@ export const PERMISSIONS = {
   // Executives read rankings (aggregates only); owners and planners score.
   'scoring.read': ROLES,
   'scoring.write': ['owner', 'planner'],
+  // Executives read and download shortlists; owners and planners build and share them.
+  'shortlist.read': ROLES,
+  'shortlist.write': ['owner', 'planner'],
   'billing.manage': ['owner'],
   'invitation.manage': ['owner'],
   'members.manage': ['owner'],

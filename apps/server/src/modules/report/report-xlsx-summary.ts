@@ -80,9 +80,10 @@ function summaryColumns(model: ReportModel): Column[] {
 }
 
 /**
- * Fills the "Summary" sheet: title, run parameters, the caution, then the ranked table (one row
- * per site in report order) with a frozen header row, an autofilter, number formats (#,##0 demand,
- * 0.0% share, 6-decimal degrees) and column widths.
+ * Fills the "Summary" sheet: title, a one-line context (workspace, run, surface, measure, unit), the
+ * caution, the ranked table (one row per site in report order) with a frozen header row and site
+ * column, an autofilter, number formats (#,##0 demand, 0.0% share, 6-decimal degrees) and column
+ * widths, then the run parameters.
  * @param sheet - an empty worksheet
  * @param model - the report model
  * @returns the table's header row number (1-based)
@@ -98,20 +99,18 @@ export function reportSummaryFill(sheet: ExcelJS.Worksheet, model: ReportModel):
       : `Demandscape ranking: ${model.title}`,
   ]);
   title.font = { bold: true, size: 14 };
-  sheet.addRow([]);
-  for (const p of reportParameterRows(model)) {
-    const row = sheet.addRow([p.label, p.value]);
-    row.getCell(1).font = { bold: true };
-    row.getCell(2).alignment = { horizontal: 'left' };
-    if (p.numFmt) row.getCell(2).numFmt = p.numFmt;
-  }
+  const s = model.settings;
+  sheet.addRow([
+    `${model.workspaceName} · run "${model.runName}" on "${model.surfaceName}" · ranked by ${measureLabel(s.measure, s)} · demand in ${model.weightLabel}`,
+  ]);
   const caution = sheet.addRow(['Caution', model.caution]);
   caution.getCell(1).font = { bold: true };
   sheet.mergeCells(caution.number, 2, caution.number, Math.min(columns.length, 8));
   caution.getCell(2).alignment = { wrapText: true, vertical: 'top' };
-  caution.height = 45;
+  caution.height = 32;
   sheet.addRow([]);
 
+  // The table comes before the parameters so that its frozen header stays near the top of the screen.
   const header = sheet.addRow(columns.map((c) => c.header));
   header.font = { bold: true };
   header.alignment = { wrapText: true, vertical: 'bottom' };
@@ -119,6 +118,15 @@ export function reportSummaryFill(sheet: ExcelJS.Worksheet, model: ReportModel):
   for (const site of model.sites) {
     const row = sheet.addRow(columns.map((c) => c.value(site)));
     columns.forEach((c, k) => c.numFmt && (row.getCell(k + 1).numFmt = c.numFmt));
+  }
+
+  sheet.addRow([]);
+  sheet.addRow(['Run parameters']).font = { bold: true, size: 12 };
+  for (const p of reportParameterRows(model)) {
+    const row = sheet.addRow([p.label, p.value]);
+    row.getCell(1).font = { bold: true };
+    row.getCell(2).alignment = { horizontal: 'left' };
+    if (p.numFmt) row.getCell(2).numFmt = p.numFmt;
   }
   sheet.views = [
     {

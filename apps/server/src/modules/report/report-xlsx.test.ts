@@ -54,6 +54,8 @@ describe('reportWorkbook (ranking)', () => {
     expect(rowOf(sheet, 'Caution').getCell(2).value).toBe(SHORTLIST_CAUTION);
 
     const header = rowOf(sheet, 'Site');
+    // Header right under title, context and caution, so the frozen rows stay few.
+    expect(header.number).toBe(5);
     expect(header.values).toContain('Value: net new demand');
     expect(header.values).toContain('Within 3 km');
     const first = sheet.getRow(header.number + 1);
