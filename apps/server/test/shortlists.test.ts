@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DemandscapeApp } from '../src/app.js';
 import type { ScoringRunJson } from '../src/modules/scoring/scoring.types.js';
 import { SHORTLIST_CAUTION } from '../src/modules/shortlist/shortlist-caution.js';
-import { scoredWorkspace } from './shortlist-fixtures.js';
+import { scoredWorkspace, scoringRunFinished } from './shortlist-fixtures.js';
 import { testAppCreate, testMembershipAdd, testUserSignedIn, type TestClient } from './utils.js';
 
 describe('shortlists: versions, snapshots, org list, share by e-mail', { timeout: 120_000 }, () => {
@@ -262,5 +262,39 @@ describe('shortlists: versions, snapshots, org list, share by e-mail', { timeout
       .post(`${w.base}/shortlists/${s.id}/share`, { userIds: [executiveId] })
       .expect(200);
     expect(ds.mailbox.slice(before).map((m) => m.to)).toEqual(['eve@larchloaf.example']);
+  });
+  it('keeps a version readable and exportable after its scoring run and sites are deleted', async () => {
+    const other = (
+      await planner
+        .post(`${w.base}/scoring-runs`, { surfaceId: w.surfaceId, name: 'Short-lived run' })
+        .expect(202)
+    ).body.run;
+    await scoringRunFinished(planner, `${w.base}/scoring-runs/${other.id}`);
+    const s = (
+      await planner
+        .post(`${w.base}/shortlists`, {
+          name: 'Survivor',
+          scoringRunId: other.id,
+          items: items('Lantern Hill'),
+        })
+        .expect(201)
+    ).body.shortlist;
+    const captured = s.version.items[0].score.captured;
+    await planner.del(`${w.base}/scoring-runs/${other.id}`).expect(204);
+    await planner.del(`${w.base}/sites/${w.siteIds['Lantern Hill']}`).expect(204);
+    const read = (await executive.get(`${w.base}/shortlists/${s.id}`).expect(200)).body.shortlist;
+    expect(read.version).toMatchObject({
+      scoringRunId: other.id,
+      scoringRunName: 'Short-lived run',
+    });
+    expect(read.version.items[0]).toMatchObject({ name: 'Lantern Hill', score: { captured } });
+    await executive.get(`${w.base}/shortlists/${s.id}/export.xlsx`).expect(200);
+    const res = await planner
+      .post(`${w.base}/shortlists/${s.id}/versions`, {
+        scoringRunId: other.id,
+        items: [{ siteId: w.siteIds['Quay corner'] }],
+      })
+      .expect(400);
+    expect(res.body.error.field).toBe('scoringRunId');
   });
 });
