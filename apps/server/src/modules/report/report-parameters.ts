@@ -8,6 +8,13 @@ export const SHARE_FORMAT = '0.0%';
 /** Cell number format for WGS84 degrees (6 decimals, about 0.1 m). */
 export const DEGREE_FORMAT = '0.000000';
 
+/**
+ * Most per-site sheets in one workbook: a shortlist has at most 50 sites; a ranking of more
+ * candidates gets sheets for its first 50 (the summary table lists all). Each sheet costs tens of
+ * milliseconds to write, so 1,000 sheets would hold a request for many seconds.
+ */
+export const REPORT_SITE_SHEETS_MAX = 50;
+
 /** One "label: value" line of the run parameters. */
 export interface ParameterRow {
   label: string;

@@ -4,6 +4,7 @@ import type { ReportModel } from './report-model.js';
 import {
   DEGREE_FORMAT,
   DEMAND_FORMAT,
+  REPORT_SITE_SHEETS_MAX,
   SHARE_FORMAT,
   reportParameterRows,
 } from './report-parameters.js';
@@ -108,7 +109,14 @@ export function reportSummaryFill(sheet: ExcelJS.Worksheet, model: ReportModel):
   sheet.mergeCells(caution.number, 2, caution.number, Math.min(columns.length, 8));
   caution.getCell(2).alignment = { wrapText: true, vertical: 'top' };
   caution.height = 32;
-  sheet.addRow([]);
+  const n = model.sites.length;
+  sheet.addRow(
+    n > REPORT_SITE_SHEETS_MAX
+      ? [
+          `Site sheets for the first ${REPORT_SITE_SHEETS_MAX} of ${n.toLocaleString('en-US')} candidates; this table lists all.`,
+        ]
+      : [],
+  );
 
   // The table comes before the parameters so that its frozen header stays near the top of the screen.
   const header = sheet.addRow(columns.map((c) => c.header));

@@ -98,6 +98,29 @@ describe('reportWorkbook (ranking)', () => {
   });
 });
 
+describe('reportWorkbook (long ranking)', () => {
+  it('writes site sheets for the first 50 candidates only and says so above the full table', async () => {
+    const model = reportFromRun(reportRunFixture(), 'North corridor');
+    const [first] = model.sites;
+    model.sites = Array.from({ length: 60 }, (_, k) => ({
+      ...first,
+      siteId: `c${k}`,
+      name: `Candidate ${k + 1}`,
+      score: { ...first.score, rank: k + 1 },
+    }));
+    const wb = await readBack(await reportWorkbook(model, new Date()));
+    expect(wb.worksheets).toHaveLength(1 + 50);
+    expect(wb.worksheets[50].name).toBe('50 Candidate 50');
+    const summary = wb.getWorksheet('Summary')!;
+    expect(summary.getCell('A4').value).toBe(
+      'Site sheets for the first 50 of 60 candidates; this table lists all.',
+    );
+    expect(summary.getRow(rowOf(summary, 'Site').number + 60).getCell(1).value).toBe(
+      'Candidate 60',
+    );
+  });
+});
+
 describe('reportWorkbook (shortlist)', () => {
   it('lists the items in the planner’s order with position, note and version', async () => {
     const run = reportRunFixture();
