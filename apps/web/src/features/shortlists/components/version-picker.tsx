@@ -19,7 +19,7 @@ export function VersionPicker({ versions, value, onChange }: VersionPickerProps)
   const sorted = [...versions].sort((a, b) => b.version - a.version);
   const latest = sorted[0]?.version;
   return (
-    <Field label="Version" className="w-full max-w-md">
+    <Field label="Version" className="w-full max-w-2xl">
       {(control) => (
         <Select {...control} value={String(value)} onChange={(e) => onChange(Number(e.target.value))}>
           {sorted.map((v) => (
