@@ -18,8 +18,17 @@ export type RankingTableProps = {
 /** Rows shown before "Show all": long rankings (hundreds of candidates) stay quick to read and render. */
 export const RANKING_FIRST_ROWS = 50;
 
-function valueText(c: CandidateScoreJson, measure: string, unit: string): string {
-  return measure === 'shareOfTotal' ? percentText(c.value) : `${demandText(c.value)} ${unit}`;
+// A demand figure with its unit beside it, kept on one line; the unit is set smaller so long labels stay light.
+function Demand({ value, unit }: { value: number; unit: string }) {
+  return (
+    <span className="whitespace-nowrap">
+      {demandText(value)} <span className="text-xs text-ink-muted">{unit}</span>
+    </span>
+  );
+}
+
+function measureValue(c: CandidateScoreJson, measure: string, unit: string) {
+  return measure === 'shareOfTotal' ? percentText(c.value) : <Demand value={c.value} unit={unit} />;
 }
 
 /**
@@ -90,14 +99,20 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
                       {c.name}
                     </button>
                   </td>
-                  <td className="py-2 pr-2 text-right font-semibold">{valueText(c, run.settings.measure, unit)}</td>
-                  <td className="py-2 pr-2 text-right">{demandText(c.captured)} {unit}</td>
-                  <td className="py-2 pr-2 text-right">{demandText(c.cannibalization)} {unit}</td>
-                  <td className="py-2 pr-2 text-right">{demandText(c.netNew)} {unit}</td>
-                  <td className="py-2 pr-2 text-right">{percentText(c.shareOfTotal)}</td>
+                  <td className="py-2 pr-2 text-right font-semibold">{measureValue(c, run.settings.measure, unit)}</td>
+                  <td className="py-2 pr-2 text-right">
+                    <Demand value={c.captured} unit={unit} />
+                  </td>
+                  <td className="py-2 pr-2 text-right">
+                    <Demand value={c.cannibalization} unit={unit} />
+                  </td>
+                  <td className="py-2 pr-2 text-right">
+                    <Demand value={c.netNew} unit={unit} />
+                  </td>
+                  <td className="py-2 pr-2 text-right whitespace-nowrap">{percentText(c.shareOfTotal)}</td>
                   {c.rings.map((r) => (
                     <td key={r.radiusM} className="py-2 pr-2 text-right">
-                      {demandText(r.demand)} {unit}
+                      <Demand value={r.demand} unit={unit} />
                     </td>
                   ))}
                 </tr>

@@ -16,12 +16,15 @@ function runWith(count: number) {
 describe('RankingTable', () => {
   it('shows the first 50 of a long ranking, then all on request', async () => {
     renderWithProviders(<RankingTable run={runWith(60)} selectedId={null} onSelect={() => {}} />);
+    // Counted with a selector: role queries over hundreds of cells are slow in happy-dom.
     const table = screen.getByRole('table');
-    expect(within(table).getAllByRole('row')).toHaveLength(51);
+    expect(table.querySelectorAll('tbody tr')).toHaveLength(50);
+    expect(within(table).getByText('Candidate 50')).toBeInTheDocument();
+    expect(within(table).queryByText('Candidate 51')).not.toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Show all 60 candidates' }));
-    expect(within(table).getAllByRole('row')).toHaveLength(61);
+    expect(table.querySelectorAll('tbody tr')).toHaveLength(60);
     expect(screen.queryByRole('button', { name: /Show all/ })).not.toBeInTheDocument();
-  });
+  }, 15_000);
 
   it('names a ring measure in miles in the value column and the ring columns', () => {
     const run = createFinishedScoringRun({ settings: { ...createScoringSettings({ measure: 'ring:0', radiusUnit: 'mi', radii: [1] }), radiiM: [1609.344] } });
