@@ -77,6 +77,25 @@ describe('ShortlistEditor', () => {
     expect(body).toEqual({ scoringRunId: 'run_1', items: [{ siteId: 'site_ropewalk' }, { siteId: 'site_quay' }], versionNote: 'Swapped order' });
   }, 20_000);
 
+  it('flags chosen sites that a newly chosen run does not score and leaves them out of the new version', async () => {
+    let body: unknown = null;
+    mockShortlist({ onVersion: (b) => (body = b) });
+    const later = createRun({ id: 'run_2', name: 'Huff β 2.5', finishedAt: '2026-12-02T12:00:00.000Z' });
+    later.results!.candidates = later.results!.candidates.filter((c) => c.siteId !== 'site_ropewalk');
+    server.use(
+      http.get(`${base}/scoring-runs`, () => HttpResponse.json({ runs: [createRunSummary({ id: 'run_2', name: 'Huff β 2.5' }), createRunSummary()] })),
+      http.get(`${base}/scoring-runs/run_2`, () => HttpResponse.json({ run: later })),
+    );
+    renderWithProviders(<ShortlistEditor orgId="org_1" workspaceId="wsp_1" shortlistId="shl_1" canWrite onClose={() => {}} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Edit sites, order and notes' }));
+    const runSelect = await screen.findByRole('combobox', { name: 'Scoring run' });
+    expect(runSelect).toHaveValue('run_1');
+    await userEvent.selectOptions(runSelect, 'run_2');
+    expect(await screen.findByText('Not in this run: left out when saved')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Save as new version' }));
+    await expect.poll(() => body).toEqual({ scoringRunId: 'run_2', items: [{ siteId: 'site_quay', note: 'Corner unit with morning foot traffic from the ferry.' }] });
+  }, 20_000);
+
   it('renames, and deletes only after confirming', async () => {
     mockShortlist();
     let renamed: unknown = null;
