@@ -5,7 +5,7 @@ import { ScoringRunner } from '../src/jobs/scoring-runner.js';
 import { loggerCreate } from '../src/logger.js';
 import { ScoringRunSchema, type ScoringRun } from '../src/modules/scoring/scoring-run.entity.js';
 import { SCORING_STALE_MS } from '../src/modules/scoring/scoring-run.repository.js';
-import { quillportAt, scoringRunWait } from './scoring-fixtures.js';
+import { SCORING_SITES, scoringRunWait } from './scoring-fixtures.js';
 import { customerFileStored, demoPoints, surfaceStored } from './surface-fixtures.js';
 import { testAppCreate, testUserSignedIn } from './utils.js';
 
@@ -22,7 +22,7 @@ describe('scoring runner: work of stopped processes fails with a reason', { time
     const fileId = await customerFileStored(ds, orgId, wsId, points);
     const surfaceId = await surfaceStored(ds, { orgId, wsId, fileId }, points, 'succeeded');
     const base = `/api/organizations/${orgId}/workspaces/${wsId}`;
-    await owner.post(`${base}/sites`, { kind: 'candidate', name: 'Quay corner', ...quillportAt(0, 0), attractiveness: 1 }).expect(201);
+    for (const s of SCORING_SITES) await owner.post(`${base}/sites`, s).expect(201);
     const id = (await owner.post(`${base}/scoring-runs`, { surfaceId }).expect(202)).body.run.id;
     await scoringRunWait(owner, `${base}/scoring-runs/${id}`, (r) => r.status === 'succeeded');
     template = await ds.orm.em.fork().findOneOrFail(ScoringRunSchema, id, { populate: ['sites', 'results'] });
@@ -60,6 +60,31 @@ describe('scoring runner: work of stopped processes fails with a reason', { time
     expect(b.claimedBy).toBeNull();
     expect(await rowOf(fresh)).toMatchObject({ status: 'queued', claimedBy: 'scoring:other-host:2:bbbb' });
     await runner.stop();
+  });
+
+  it('a large run split by grid rows over two worker threads gives the same results as one worker', async () => {
+    const runner = new ScoringRunner(ds.orm, { concurrency: 2, splitMinWork: 0, log: loggerCreate('silent') });
+    await runner.start();
+    const id = await rowStored({ status: 'queued', results: null, claimedBy: runner.id, heartbeatAt: new Date() });
+    runner.scoreEnqueue(id);
+    await runner.idle();
+    const row = await ds.orm.em.fork().findOneOrFail(ScoringRunSchema, id, { populate: ['results'] });
+    await runner.stop();
+    expect(row.error).toBeNull();
+    expect(row.status).toBe('succeeded');
+    expect(row.timings).toMatchObject({ threads: 2 });
+    const one = template.results!;
+    const two = row.results!;
+    expect(two.candidates.map((c) => c.siteId)).toEqual(one.candidates.map((c) => c.siteId));
+    // Sums over the two halves of the rows equal the sums over all rows up to round-off [D].
+    expect(two.totalDemand).toBeCloseTo(one.totalDemand, 8);
+    two.candidates.forEach((c, k) => {
+      const o = one.candidates[k];
+      for (const key of ['captured', 'cannibalization', 'netNew', 'shareOfTotal', 'value'] as const) expect(c[key]).toBeCloseTo(o[key], 8);
+      c.rings.forEach((r, j) => expect(r.demand).toBeCloseTo(o.rings[j].demand, 8));
+      c.cannibalizedFrom.forEach((l, j) => expect(l.demand).toBeCloseTo(o.cannibalizedFrom[j].demand, 8));
+      expect(c.explanation).toBe(o.explanation);
+    });
   });
 
   it('a stopping runner fails its own unfinished work at once, with the reason', async () => {

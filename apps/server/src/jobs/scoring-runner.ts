@@ -7,7 +7,7 @@ import { AppError } from '../modules/common/errors.js';
 import { scoringInputLoad, scoringStabilityInputLoad } from '../modules/scoring/scoring-input.js';
 import { ScoringRunSchema } from '../modules/scoring/scoring-run.entity.js';
 import { scoringRecoverStale, scoringStabilityFail, SCORING_STALE_MS } from '../modules/scoring/scoring-run.repository.js';
-import type { ScoringComputeInput } from '../modules/scoring/scoring-compute.js';
+import { scoringJoin, type ScoringComputeInput, type ScoringComputeOutput } from '../modules/scoring/scoring-compute.js';
 import type { SiteSetParts } from '../modules/scoring/scoring-set.js';
 import { scoringWorkerFile, type ScoringWorkerInput, type ScoringWorkerMessage } from './scoring-worker.js';
 import { workerStart } from './surface-worker-start.js';
@@ -20,6 +20,11 @@ export interface ScoringRunnerOptions {
   heartbeatMs?: number;
   /** A claimed row whose heartbeat is older than this belongs to a dead process, ms (default 30,000). */
   staleMs?: number;
+  /**
+   * Runs with at least this many cell × candidate × (own stores + 1) terms are split by grid rows
+   * over two worker threads when a second slot is free (default 2e8; 0 splits every run).
+   */
+  splitMinWork?: number;
   log: Logger;
 }
 
@@ -212,7 +217,7 @@ export class ScoringRunner {
           lastWrite = now;
           void this.orm.em.fork().nativeUpdate(ScoringRunSchema, { ...claim, status: 'running' }, { progress: Math.min(0.99, f) }).catch(() => {});
         };
-        const m = await this.work(runId, { mode: 'score', input }, [input.raster.buffer as ArrayBuffer], onProgress);
+        const m = await this.scoreOrSplit(runId, input, onProgress);
         if (m.type === 'score') {
           await this.orm.em.fork().nativeUpdate(
             ScoringRunSchema,
@@ -225,6 +230,45 @@ export class ScoringRunner {
     } catch (err) {
       const e = err as AppError;
       await fail(e.code && e.status ? e.code : 'ENGINE_ERROR', e.code && e.status ? e.message : `scoring stopped: ${e.message}`);
+    }
+  }
+
+  /** Demand cells × candidates × (own stores + 1): the Huff passes a run needs. */
+  private static workOf(input: ScoringComputeInput): number {
+    let cells = 0;
+    for (let c = 0; c < input.raster.length; c++) if (input.raster[c] > 0) cells++;
+    const candidates = input.sites.filter((s) => s.kind === 'candidate').length;
+    return cells * candidates * (input.sites.filter((s) => s.kind === 'own').length + 1);
+  }
+
+  /**
+   * One worker, or — for a large run when a second slot is free — two workers over the two
+   * halves of the grid rows, joined here (every score is a sum over cells).
+   */
+  private async scoreOrSplit(runId: string, input: ScoringComputeInput, onProgress: (f: number) => void): Promise<Outcome> {
+    const h = input.grid.height;
+    const split = h >= 2 && this.running < this.options.concurrency && ScoringRunner.workOf(input) >= (this.options.splitMinWork ?? 2e8);
+    if (!split) return this.work(runId, { mode: 'score', input }, [input.raster.buffer as ArrayBuffer], onProgress);
+    this.running++;
+    try {
+      const t = performance.now();
+      const mid = Math.floor(h / 2);
+      const fractions = [0, 0];
+      const halves = ([[0, mid], [mid, h]] as [number, number][]).map((rows, k) => {
+        const own = { ...input, raster: input.raster.slice() };
+        return this.work(runId, { mode: 'part', input: own, rows }, [own.raster.buffer as ArrayBuffer], (f) => {
+          fractions[k] = f;
+          onProgress((fractions[0] + fractions[1]) / 2);
+        });
+      });
+      const answers = await Promise.all(halves);
+      const failed = answers.find((a) => a.type !== 'part');
+      if (failed) return failed;
+      const out: ScoringComputeOutput = scoringJoin(input, answers.map((a) => (a as Extract<Outcome, { type: 'part' }>).part), Number(((performance.now() - t) / 1000).toFixed(3)));
+      return { type: 'score', ...out, timings: { ...out.timings, threads: 2 } };
+    } finally {
+      this.running--;
+      this.waiting.shift()?.();
     }
   }
 

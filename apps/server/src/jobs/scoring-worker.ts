@@ -1,7 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import { parentPort } from 'node:worker_threads';
-import { isCoreError } from '@demandscape/core';
-import { scoringCompute, type ScoringComputeInput } from '../modules/scoring/scoring-compute.js';
+import { isCoreError, type SiteScoresPart } from '@demandscape/core';
+import { scoringCompute, scoringPartCompute, type ScoringComputeInput } from '../modules/scoring/scoring-compute.js';
 import { scoringSetCompute, type SiteSetParts } from '../modules/scoring/scoring-set.js';
 import { scoringStabilityCompute, type StabilityComputeInput } from '../modules/scoring/scoring-stability.js';
 import type { ScoringResultsJson, StabilityJson } from '../modules/scoring/scoring.types.js';
@@ -14,6 +14,7 @@ import type { ScoringResultsJson, StabilityJson } from '../modules/scoring/scori
 /** The one message the main thread sends. */
 export type ScoringWorkerInput =
   | { mode: 'score'; input: ScoringComputeInput }
+  | { mode: 'part'; input: ScoringComputeInput; rows: [number, number] }
   | { mode: 'stability'; input: StabilityComputeInput }
   | { mode: 'set'; input: ScoringComputeInput; siteIds: string[] };
 
@@ -21,6 +22,7 @@ export type ScoringWorkerInput =
 export type ScoringWorkerMessage =
   | { type: 'progress'; fraction: number }
   | { type: 'score'; results: ScoringResultsJson; warnings: string[]; timings: Record<string, number> }
+  | { type: 'part'; part: SiteScoresPart }
   | { type: 'stability'; stability: StabilityJson }
   | { type: 'set'; set: SiteSetParts }
   | { type: 'error'; code: string; message: string; field?: string };
@@ -52,6 +54,10 @@ if (port) {
     try {
       if (job.mode === 'score') {
         port.postMessage({ type: 'score', ...scoringCompute(job.input, progress) } satisfies ScoringWorkerMessage);
+      } else if (job.mode === 'part') {
+        const part = scoringPartCompute(job.input, job.rows, progress);
+        const buffers = [part.ownToday, part.captured, part.cannibalization, part.rings, part.cannibalizedFrom].filter((a) => a !== null).map((a) => a.buffer as ArrayBuffer);
+        port.postMessage({ type: 'part', part } satisfies ScoringWorkerMessage, buffers);
       } else if (job.mode === 'stability') {
         port.postMessage({ type: 'stability', stability: scoringStabilityCompute(job.input) } satisfies ScoringWorkerMessage);
       } else {

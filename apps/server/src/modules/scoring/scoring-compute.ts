@@ -1,7 +1,28 @@
-import { projectionConverter, siteRanking, siteScores, type GridSpec, type LocalProjection, type RankMeasure, type ScoringSurface, type Site } from '@demandscape/core';
+import {
+  projectionConverter,
+  siteRanking,
+  siteScores,
+  siteScoresFromParts,
+  siteScoresPart,
+  type GridSpec,
+  type LocalProjection,
+  type RankMeasure,
+  type ScoringSurface,
+  type Site,
+  type SiteScores,
+  type SiteScoresPart,
+} from '@demandscape/core';
 import type { SurfaceResolved } from '../surface/surface.entity.js';
 import { candidateExplanation } from './scoring-explanation.js';
 import type { CandidateScoreJson, RunSiteJson, ScoringMeasure, ScoringResultsJson, ScoringRunSummaryJson } from './scoring.types.js';
+
+/** What a scoring computation returns. */
+export interface ScoringComputeOutput {
+  results: ScoringResultsJson;
+  warnings: string[];
+  /** Seconds per stage. */
+  timings: Record<string, number>;
+}
 
 /** Settings as a run stores them (radii also in metres). */
 export type RunSettings = ScoringRunSummaryJson['settings'];
@@ -105,22 +126,64 @@ function listText(names: string[]): string {
  * @example
  * const { results } = scoringCompute(input);
  */
-export function scoringCompute(input: ScoringComputeInput, onProgress?: (fraction: number) => void): { results: ScoringResultsJson; warnings: string[]; timings: Record<string, number> } {
+export function scoringCompute(input: ScoringComputeInput, onProgress?: (fraction: number) => void): ScoringComputeOutput {
   let t = performance.now();
-  const timings: Record<string, number> = {};
-  const lap = (name: string): void => {
-    timings[name] = Number(((performance.now() - t) / 1000).toFixed(3));
-    t = performance.now();
-  };
   const surface = scoringSurfaceFromRaster(input.raster, input.grid);
   const planar = runSitesProjected(input.sites, input.projection);
   const warnings = scoringWarnings(input.sites, planar, input.grid);
-  lap('prepare');
+  const prepare = seconds(t);
+  t = performance.now();
   const { settings } = input;
   const scores = siteScores(surface, planar, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM, minDistanceM: settings.minDistanceM, onProgress });
-  lap('huff');
+  const huff = seconds(t);
+  t = performance.now();
+  const results = scoringResultsFrom(input, scores);
+  return { results, warnings, timings: { prepare, huff, rank: seconds(t) } };
+}
+
+/**
+ * One worker's share of a split run: the Huff and ring sums over grid rows `rows` (core
+ * `siteScoresPart`); parts of disjoint rows covering the grid are joined by {@link scoringJoin}.
+ * @param input the run's input
+ * @param rows [first row, row after the last)
+ * @param onProgress receives 0–1
+ * @returns the part (plain typed arrays; transfer their buffers)
+ * @example
+ * const top = scoringPartCompute(input, [0, 200]);
+ */
+export function scoringPartCompute(input: ScoringComputeInput, rows: [number, number], onProgress?: (fraction: number) => void): SiteScoresPart {
+  const surface = scoringSurfaceFromRaster(input.raster, input.grid);
+  const planar = runSitesProjected(input.sites, input.projection);
+  const { settings } = input;
+  return siteScoresPart(surface, planar, { alpha: settings.alpha, beta: settings.beta, radii: settings.radiiM, minDistanceM: settings.minDistanceM, rows, onProgress });
+}
+
+/**
+ * Joins the parts of a split run (core `siteScoresFromParts`) and ranks and explains as
+ * {@link scoringCompute} does.
+ * @param input the run's input (its raster is only read for the grid and warnings)
+ * @param parts parts covering every grid row once
+ * @param huffSeconds wall time of the parts
+ * @returns results, warnings and timings (s)
+ * @example
+ * const out = scoringJoin(input, [top, bottom], 1.2);
+ */
+export function scoringJoin(input: ScoringComputeInput, parts: readonly SiteScoresPart[], huffSeconds: number): ScoringComputeOutput {
+  const t = performance.now();
+  const planar = runSitesProjected(input.sites, input.projection);
+  const warnings = scoringWarnings(input.sites, planar, input.grid);
+  const scores = siteScoresFromParts({ spec: input.grid, values: new Float64Array(0) }, planar, parts, { radii: input.settings.radiiM });
+  const results = scoringResultsFrom(input, scores);
+  return { results, warnings, timings: { huff: huffSeconds, join: seconds(t) } };
+}
+
+function seconds(start: number): number {
+  return Number(((performance.now() - start) / 1000).toFixed(3));
+}
+
+function scoringResultsFrom(input: ScoringComputeInput, scores: SiteScores): ScoringResultsJson {
+  const { settings } = input;
   const ranking = siteRanking(scores.candidates, rankMeasureOf(settings.measure, settings.radiiM));
-  lap('rank');
   const byId = new Map(input.sites.map((s) => [s.siteId, s]));
   const scoreById = new Map(scores.candidates.map((c) => [c.id, c]));
   const nameOf = (id: string): string => byId.get(id)?.name ?? id;
@@ -156,9 +219,5 @@ export function scoringCompute(input: ScoringComputeInput, onProgress?: (fractio
       }),
     };
   });
-  return {
-    results: { totalDemand: scores.totalDemand, ownToday: scores.ownToday.map((o) => ({ siteId: o.id, name: nameOf(o.id), demand: o.demand })), candidates },
-    warnings,
-    timings,
-  };
+  return { totalDemand: scores.totalDemand, ownToday: scores.ownToday.map((o) => ({ siteId: o.id, name: nameOf(o.id), demand: o.demand })), candidates };
 }
