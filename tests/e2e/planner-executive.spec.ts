@@ -177,7 +177,7 @@ describe('the planner’s and the executive’s day in a real browser', () => {
     expect(await dialog.getByLabel('Kind column (optional)').inputValue()).toBe('');
     expect(await dialog.getByLabel('Default kind').inputValue()).toBe('candidate');
     await dialog.getByRole('cell', { name: IMPORTED[0] }).waitFor();
-    await shot('03-import-mapping');
+    await shot('03-import-mapping', { fullPage: false });
     if ((await dialog.getByLabel('Attractiveness column (optional)').inputValue()) === '') {
       await dialog.getByLabel('Attractiveness column (optional)').selectOption('Floor area (m²)');
     }
@@ -217,13 +217,9 @@ describe('the planner’s and the executive’s day in a real browser', () => {
     const ranks = await rows.locator('td:nth-child(2)').allTextContents();
     expect(ranks.map(Number)).toEqual(Array.from({ length: candidateCount }, (_, k) => k + 1));
     const names = await rows.locator('td:nth-child(3) button').allTextContents();
-    expect(new Set(names)).toEqual(
-      new Set([
-        ...names.filter((n) => !IMPORTED.includes(n) && n !== CLICKED.name),
-        ...IMPORTED,
-        CLICKED.name,
-      ]),
-    );
+    // Every candidate is ranked: the seeded ones, the one placed on the map and the imported ones.
+    expect(new Set(names).size).toBe(candidateCount);
+    expect(names).toEqual(expect.arrayContaining([CLICKED.name, ...IMPORTED]));
     topThree = names.slice(0, 3);
 
     await table.getByRole('button', { name: topThree[0], exact: true }).click();
@@ -276,7 +272,7 @@ describe('the planner’s and the executive’s day in a real browser', () => {
     await dialog.getByText('Sent to 1 person').waitFor();
     await dialog.getByRole('list', { name: 'Sent to' }).getByText(EXECUTIVE.name).waitFor();
     await dialog.getByText(EXECUTIVE.email).waitFor();
-    await shot('08-shared');
+    await shot('08-shared', { fullPage: false });
     await dialog.getByRole('button', { name: 'Done' }).click();
     expect(pageErrors).toEqual([]);
   });
@@ -314,6 +310,9 @@ describe('the planner’s and the executive’s day in a real browser', () => {
     await expect.poll(() => rows.count()).toBe(3);
     expect(await rows.locator('th').allTextContents()).toEqual(topThree);
     expect(await rows.first().locator('td').nth(1).textContent()).toBe(`1 of ${candidateCount}`);
+    // The planner checked rank stability before saving: the version carries each site's rank range.
+    for (const cell of await rows.locator('td:last-child').allTextContents())
+      expect(cell).toMatch(/^ranks? \d/);
     const notes = page.getByRole('list', { name: 'Notes and explanations per site' });
     await notes.getByText('Strongest net new demand; ask the landlord about a terrace.').waitFor();
     expect(await notes.locator('dd').nth(1).textContent()).toMatch(/^Captures /);
@@ -322,6 +321,13 @@ describe('the planner’s and the executive’s day in a real browser', () => {
       .getByText(/estimate/)
       .first()
       .waitFor();
+    // Read only: nothing to type into, no site to tick (the map's contour switches are views, not edits).
+    expect(await page.getByRole('textbox').count()).toBe(0);
+    for (const region of ['Ranked sites', 'Why each site']) {
+      expect(await page.getByRole('region', { name: region }).getByRole('checkbox').count()).toBe(
+        0,
+      );
+    }
     for (const control of [
       'Edit in workspace',
       'Share with executives',
