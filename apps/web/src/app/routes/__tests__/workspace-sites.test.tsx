@@ -6,6 +6,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { createImportedCustomerFile } from '../../../features/customer-files/testing/customer-file-factories';
 import type { BasemapSiteMapProps } from '../../../features/map/components/basemap-site-map';
 import type { SurfaceMapProps } from '../../../features/map/components/surface-map';
+import { createScoringSettings } from '../../../features/scoring/testing/scoring-factories';
 import { createSiteList } from '../../../features/sites/testing/site-factories';
 import { createSurface, createSurfaceEstimate } from '../../../features/surfaces/testing/surface-factories';
 import { createMe, createOrganization, createWorkspace } from '../../../testing/data-generators';
@@ -47,6 +48,9 @@ function studyAs(role: Role, options: { surfaces?: unknown[] } = {}) {
     http.get(`${ws}/surfaces/srf_1`, () => HttpResponse.json({ surface: (options.surfaces ?? [])[0] })),
     http.post(`${ws}/surfaces/estimate`, () => HttpResponse.json(createSurfaceEstimate())),
     http.get(`${ws}/sites`, () => (siteRequests(), HttpResponse.json({ sites: createSiteList() }))),
+    http.get(`${ws}/scoring-runs`, () => HttpResponse.json({ runs: [] })),
+    http.get(`${ws}/scoring-settings`, () => HttpResponse.json({ settings: createScoringSettings() })),
+    http.get(`${ws}/shortlists`, () => HttpResponse.json({ shortlists: [] })),
     http.patch(`${ws}/sites/:id`, async ({ request, params }) => {
       const body = await request.json();
       patches.push({ id: params.id, body });

@@ -44,8 +44,13 @@ describe('siteFeatureMoved', () => {
 });
 
 describe('siteBounds', () => {
-  it('boxes all sites', () => {
-    expect(siteBounds([quay, harbour, rival])).toEqual([-38.51, 44.49, -38.45, 44.55]);
+  it('boxes all sites with a fifth of their span to spare on each side', () => {
+    const [w, s, e, n] = siteBounds([quay, harbour, rival])!;
+    // Sites span -38.51…-38.45 and 44.49…44.55 (0.06° each way); 0.2 × 0.06 = 0.012° of margin.
+    expect(w).toBeCloseTo(-38.522, 12);
+    expect(e).toBeCloseTo(-38.438, 12);
+    expect(s).toBeCloseTo(44.478, 12);
+    expect(n).toBeCloseTo(44.562, 12);
   });
 
   it('widens a single site to a box of at least 0.03° so the map does not zoom to street level', () => {
@@ -62,8 +67,8 @@ describe('siteBounds', () => {
 });
 
 describe('siteLabelsShown', () => {
-  it('labels every site up to the limit', () => {
-    expect(siteLabelsShown([quay, harbour, rival], null, 3)).toHaveLength(3);
+  it('labels every site up to the limit, candidates before own stores before competitors', () => {
+    expect(siteLabelsShown([rival, harbour, quay], null, 3).map((s) => s.id)).toEqual(['site_1', 'site_2', 'site_3']);
   });
 
   it('keeps the selected and the ranked sites first when there are more than the limit', () => {

@@ -74,9 +74,11 @@ export function siteFeatureMoved(
 
 /** Smallest span (degrees) of the box fitted around sites, so one site does not zoom to street level. */
 const MIN_SPAN_DEG = 0.03;
+const EDGE_SHARE = 0.2;
 
 /**
- * The box to fit the map to when there is no surface: around all drawable sites, at least ~3 km wide.
+ * The box to fit the map to when there is no surface: around all drawable sites with a fifth of
+ * their span to spare on each side, at least ~3 km wide.
  * @param sites the sites
  * @returns west, south, east, north, or null without drawable sites
  * @example siteBounds([{ …, lon: -38.5, lat: 44.5 }]) // [-38.515, 44.485, -38.485, 44.515]
@@ -91,22 +93,23 @@ export function siteBounds(sites: readonly MapSite[]): [number, number, number, 
     s = Math.min(s, lat!);
     n = Math.max(n, lat!);
   }
-  const padLon = Math.max(0, (MIN_SPAN_DEG - (e - w)) / 2);
-  const padLat = Math.max(0, (MIN_SPAN_DEG - (n - s)) / 2);
+  // A fifth of the span on each side keeps edge sites' symbols and labels inside the view.
+  const padLon = Math.max(0, (MIN_SPAN_DEG - (e - w)) / 2) + (e - w) * EDGE_SHARE;
+  const padLat = Math.max(0, (MIN_SPAN_DEG - (n - s)) / 2) + (n - s) * EDGE_SHARE;
   return [w - padLon, s - padLat, e + padLon, n + padLat];
 }
 
 /**
- * Which sites get a written label: all of them up to `max` (HTML labels are cheap in dozens, not in
- * thousands); beyond that the selected one and those with an explicit label (e.g. ranked ones) first.
+ * Which sites get a written label, most important first: the selected one, those with an explicit
+ * label (e.g. ranked ones), candidates, own stores, competitors. At most `max` (HTML labels are cheap
+ * in dozens, not in thousands); the map then hides any that would print over one before it.
  * @param sites the sites
- * @param selectedId the selected site, always labelled
+ * @param selectedId the selected site
  * @param max most labels drawn
- * @returns the sites to label
+ * @returns the sites to label, in priority order
  * @example siteLabelsShown(sites, 's1', 300)
  */
 export function siteLabelsShown(sites: readonly MapSite[], selectedId: string | null | undefined, max = 300): MapSite[] {
-  if (sites.length <= max) return [...sites];
-  const rank = (s: MapSite) => (s.id === selectedId ? 0 : s.label?.trim() ? 1 : 2);
+  const rank = (s: MapSite) => (s.id === selectedId ? 0 : s.label?.trim() ? 1 : 5 - siteSymbolSpecs[s.kind].order);
   return [...sites].sort((a, b) => rank(a) - rank(b)).slice(0, max);
 }

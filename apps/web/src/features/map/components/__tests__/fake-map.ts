@@ -92,6 +92,10 @@ export class FakeMap {
   queryRenderedFeatures() {
     return this.featuresUnderPointer;
   }
+  /** Screen position of a point: 1,000 px per degree from the top-left corner at -39°, 45° (enough to test overlap). */
+  project([lng, lat]: [number, number]) {
+    return { x: (lng + 39) * 1000, y: (45 - lat) * 1000 };
+  }
   getCanvas() {
     return this.canvas;
   }

@@ -13,7 +13,7 @@ import { SurfaceMap } from '../surface-map';
 import { FakeMap } from './fake-map';
 
 const maps: FakeMap[] = [];
-const labels: Array<{ text: string; lngLat: [number, number]; removed: boolean }> = [];
+const labels: Array<{ text: string; lngLat: [number, number]; removed: boolean; element: HTMLElement }> = [];
 vi.mock('../../lib/map-instance', () => ({
   mapInstanceCreate: vi.fn((_container: HTMLElement, style: unknown) => {
     const map = new FakeMap(style);
@@ -23,7 +23,7 @@ vi.mock('../../lib/map-instance', () => ({
   }),
   markerAdd: vi.fn(() => () => undefined),
   siteLabelAdd: vi.fn((element: HTMLElement, lngLat: [number, number]) => {
-    const label = { text: element.textContent ?? '', lngLat, removed: false };
+    const label = { text: element.textContent ?? '', lngLat, removed: false, element };
     labels.push(label);
     return { move: (next: [number, number]) => void (label.lngLat = next), remove: () => void (label.removed = true) };
   }),
@@ -93,7 +93,26 @@ describe('SurfaceMap with sites', () => {
   it('writes each site’s name, or its label such as a rank, beside the symbol', async () => {
     renderWithProviders(<SurfaceMap scope={scope} surface={surface} customerFile={null} role="planner" sites={sites} />);
     await sitesLayer();
-    await waitFor(() => expect(labels.filter((l) => !l.removed).map((l) => l.text)).toEqual(['Quay corner', 'Harbour Row', 'Crumbhall Mill Street', '#1']));
+    // In priority order: ranked, then candidates, own stores, competitors.
+    await waitFor(() => expect(labels.filter((l) => !l.removed).map((l) => l.text)).toEqual(['#1', 'Quay corner', 'Harbour Row', 'Crumbhall Mill Street']));
+  });
+
+  it('hides a label that would print over a more important one, and shows it again when there is room', async () => {
+    const crowded: MapSite[] = [
+      { id: 'site_1', name: 'Quay corner', kind: 'candidate', lon: -38.51, lat: 44.52 },
+      // 2 px to the right in the fake map's projection: the labels overlap.
+      { id: 'site_5', name: 'Wharf kiosk', kind: 'competitor', lon: -38.508, lat: 44.52 },
+    ];
+    renderWithProviders(<SurfaceMap scope={scope} surface={surface} customerFile={null} role="planner" sites={crowded} />);
+    const map = await sitesLayer();
+    await waitFor(() => expect(labels.filter((l) => !l.removed)).toHaveLength(2));
+    const [first, second] = labels.filter((l) => !l.removed);
+    expect([first!.text, first!.element.style.visibility]).toEqual(['Quay corner', 'visible']);
+    expect([second!.text, second!.element.style.visibility]).toEqual(['Wharf kiosk', 'hidden']);
+    // Zoomed in (here: the projection spreads the points), the second label fits again.
+    map.project = ([lng, lat]: [number, number]) => ({ x: (lng + 39) * 100_000, y: (45 - lat) * 100_000 });
+    act(() => map.fire('moveend'));
+    expect(second!.element.style.visibility).toBe('visible');
   });
 
   it('shows a legend row per kind with its symbol and count', async () => {
