@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DemandscapeApp } from '../src/app.js';
 import type { ScoringRunJson } from '../src/modules/scoring/scoring.types.js';
 import { SHORTLIST_CAUTION } from '../src/modules/shortlist/shortlist-caution.js';
+import { ShortlistVersionSchema } from '../src/modules/shortlist/shortlist.entity.js';
 import { scoredWorkspace, scoringRunFinished } from './shortlist-fixtures.js';
 import { testAppCreate, testMembershipAdd, testUserSignedIn, type TestClient } from './utils.js';
 
@@ -296,5 +297,34 @@ describe('shortlists: versions, snapshots, org list, share by e-mail', { timeout
       })
       .expect(400);
     expect(res.body.error.field).toBe('scoringRunId');
+  });
+  it('answers 409 VERSION_CONFLICT when another process saved the same version number first', async () => {
+    const s = (
+      await planner
+        .post(`${w.base}/shortlists`, {
+          name: 'Race',
+          scoringRunId: w.runId,
+          items: items('Quay corner'),
+        })
+        .expect(201)
+    ).body.shortlist;
+    const em = ds.orm.em.fork();
+    const v1 = await em.findOneOrFail(ShortlistVersionSchema, { shortlist: s.id, version: 1 });
+    // As another server process would have written it, before this one's shortlist row says so.
+    em.create(ShortlistVersionSchema, {
+      ...v1,
+      id: crypto.randomUUID(),
+      version: 2,
+      createdAt: new Date(),
+      updatedAt: new Date(),
+    });
+    await em.flush();
+    const res = await planner
+      .post(`${w.base}/shortlists/${s.id}/versions`, {
+        scoringRunId: w.runId,
+        items: items('Lantern Hill'),
+      })
+      .expect(409);
+    expect(res.body.error.code).toBe('VERSION_CONFLICT');
   });
 });

@@ -1,7 +1,8 @@
+import { UniqueConstraintViolationException } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { auditRecord } from '../audit/audit.service.js';
 import { entityId } from '../common/base.entity.js';
-import { NotFoundError, ValidationError } from '../common/errors.js';
+import { ConflictError, NotFoundError, ValidationError } from '../common/errors.js';
 import { scoringRunGet } from '../scoring/scoring.service.js';
 import type { ScoringRunJson } from '../scoring/scoring.types.js';
 import type { User } from '../user/user.entity.js';
@@ -206,6 +207,7 @@ export async function shortlistCreate(
  * @param actor - the planner or owner
  * @param input - run, ordered items with notes, version note
  * @returns the shortlist JSON with the new version
+ * @throws ConflictError 409 VERSION_CONFLICT when another request saved the same version number first
  * @example
  * await shortlistVersionCreate(em, scope, id, user, { scoringRunId, items, versionNote: 'Mill Lane first' });
  */
@@ -234,7 +236,15 @@ export async function shortlistVersionCreate(
       itemCount: input.items.length,
     },
   });
-  await em.flush();
+  try {
+    await em.flush();
+  } catch (err) {
+    if (!(err instanceof UniqueConstraintViolationException)) throw err;
+    throw new ConflictError(
+      'VERSION_CONFLICT',
+      `Another version ${version} of this shortlist was saved at the same moment; reload the shortlist and save again.`,
+    );
+  }
   return shortlistGet(em, scope, s.id);
 }
 
