@@ -18,17 +18,18 @@ export type RankingTableProps = {
 /** Rows shown before "Show all": long rankings (hundreds of candidates) stay quick to read and render. */
 export const RANKING_FIRST_ROWS = 50;
 
-// A demand figure with its unit beside it, kept on one line; the unit is set smaller so long labels stay light.
-function Demand({ value, unit }: { value: number; unit: string }) {
-  return (
-    <span className="whitespace-nowrap">
-      {demandText(value)} <span className="text-xs text-ink-muted">{unit}</span>
-    </span>
-  );
+function measureValue(c: CandidateScoreJson, measure: string): string {
+  return measure === 'shareOfTotal' ? percentText(c.value) : demandText(c.value);
 }
 
-function measureValue(c: CandidateScoreJson, measure: string, unit: string) {
-  return measure === 'shareOfTotal' ? percentText(c.value) : <Demand value={c.value} unit={unit} />;
+// A column heading with its unit on a second line: the figures below are in that unit.
+function Heading({ label, unit }: { label: string; unit: string }) {
+  return (
+    <th scope="col" className="py-2 pr-2 text-right align-bottom font-medium">
+      {label}
+      <span className="block text-[0.6875rem] font-normal text-ink-faint">{unit}</span>
+    </th>
+  );
 }
 
 /**
@@ -49,7 +50,9 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm tabular-nums">
-        <caption className="sr-only">Candidates ranked by {measure.toLowerCase()}</caption>
+        <caption className="sr-only">
+          Candidates ranked by {measure.toLowerCase()}; demand in {unit}
+        </caption>
         <thead className="text-xs text-ink-muted">
           <tr className="border-b border-line">
             {onTick ? (
@@ -57,17 +60,15 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
                 <span className="sr-only">Score together</span>
               </th>
             ) : null}
-            <th scope="col" className="py-2 pr-2 font-medium">Rank</th>
-            <th scope="col" className="py-2 pr-2 font-medium">Candidate</th>
-            <th scope="col" className="py-2 pr-2 text-right font-medium">{measure}</th>
-            <th scope="col" className="py-2 pr-2 text-right font-medium">Captured</th>
-            <th scope="col" className="py-2 pr-2 text-right font-medium">Cannibalization</th>
-            <th scope="col" className="py-2 pr-2 text-right font-medium">Net new</th>
-            <th scope="col" className="py-2 pr-2 text-right font-medium">Share</th>
+            <th scope="col" className="py-2 pr-2 align-bottom font-medium">Rank</th>
+            <th scope="col" className="py-2 pr-2 align-bottom font-medium">Candidate</th>
+            <Heading label={measure} unit={run.settings.measure === 'shareOfTotal' ? '%' : unit} />
+            <Heading label="Captured" unit={unit} />
+            <Heading label="Cannibalization" unit={unit} />
+            <Heading label="Net new" unit={unit} />
+            <Heading label="Share" unit="% of all demand" />
             {rings.map((r) => (
-              <th key={r} scope="col" className="py-2 pr-2 text-right font-medium">
-                Within {r}
-              </th>
+              <Heading key={r} label={`Within ${r}`} unit={unit} />
             ))}
           </tr>
         </thead>
@@ -92,27 +93,21 @@ export function RankingTable({ run, selectedId, onSelect, ticked, onTick }: Rank
                   <td className="py-2 pr-2">
                     <button
                       type="button"
-                      className="text-left font-medium text-accent hover:underline"
+                      className="min-w-32 text-left font-medium text-accent hover:underline"
                       aria-expanded={open}
                       onClick={() => onSelect(open ? null : c.siteId)}
                     >
                       {c.name}
                     </button>
                   </td>
-                  <td className="py-2 pr-2 text-right font-semibold">{measureValue(c, run.settings.measure, unit)}</td>
-                  <td className="py-2 pr-2 text-right">
-                    <Demand value={c.captured} unit={unit} />
-                  </td>
-                  <td className="py-2 pr-2 text-right">
-                    <Demand value={c.cannibalization} unit={unit} />
-                  </td>
-                  <td className="py-2 pr-2 text-right">
-                    <Demand value={c.netNew} unit={unit} />
-                  </td>
-                  <td className="py-2 pr-2 text-right whitespace-nowrap">{percentText(c.shareOfTotal)}</td>
+                  <td className="py-2 pr-2 text-right font-semibold">{measureValue(c, run.settings.measure)}</td>
+                  <td className="py-2 pr-2 text-right">{demandText(c.captured)}</td>
+                  <td className="py-2 pr-2 text-right">{demandText(c.cannibalization)}</td>
+                  <td className="py-2 pr-2 text-right">{demandText(c.netNew)}</td>
+                  <td className="py-2 pr-2 text-right">{percentText(c.shareOfTotal)}</td>
                   {c.rings.map((r) => (
                     <td key={r.radiusM} className="py-2 pr-2 text-right">
-                      <Demand value={r.demand} unit={unit} />
+                      {demandText(r.demand)}
                     </td>
                   ))}
                 </tr>

@@ -29,15 +29,15 @@ describe('RankingTable', () => {
   it('names a ring measure in miles in the value column and the ring columns', () => {
     const run = createFinishedScoringRun({ settings: { ...createScoringSettings({ measure: 'ring:0', radiusUnit: 'mi', radii: [1] }), radiiM: [1609.344] } });
     renderWithProviders(<RankingTable run={run} selectedId={null} onSelect={() => {}} />);
-    expect(screen.getByRole('columnheader', { name: 'Demand within 1 mi' })).toBeInTheDocument();
-    expect(screen.getByRole('columnheader', { name: 'Within 1 mi' })).toBeInTheDocument();
+    expect(screen.getByRole('columnheader', { name: 'Demand within 1 mi customers' })).toBeInTheDocument();
+    expect(screen.getByRole('columnheader', { name: 'Within 1 mi customers' })).toBeInTheDocument();
   });
 
   it('shows shares as percentages in the value column', () => {
     const share = createFinishedScoringRun({ settings: { ...createScoringSettings({ measure: 'shareOfTotal' }), radiiM: [1000, 3000, 5000] } });
     share.results!.candidates[0] = { ...share.results!.candidates[0]!, value: 0.052 };
     renderWithProviders(<RankingTable run={share} selectedId={null} onSelect={() => {}} />);
-    expect(screen.getByRole('columnheader', { name: 'Share of all demand' })).toBeInTheDocument();
-    expect(screen.getAllByRole('row')[1]).toHaveTextContent('1Harbour Steps5.2 %2,600 customers');
+    expect(screen.getByRole('columnheader', { name: 'Share of all demand %' })).toBeInTheDocument();
+    expect(screen.getAllByRole('row')[1]).toHaveTextContent('1Harbour Steps5.2 %2,600760');
   });
 });

@@ -54,9 +54,10 @@ describe('ScoringStep', () => {
 
     const table = await screen.findByRole('table', { name: /Candidates ranked by net new demand/ }, { timeout: 4000 });
     const rows = within(table).getAllByRole('row');
-    expect(rows[1]).toHaveTextContent('1Harbour Steps1,840 customers2,600 customers760 customers1,840 customers5.2 %3,100 customers11,200 customers19,800 customers');
+    expect(rows[0]).toHaveTextContent('RankCandidateNet new demandcustomersCapturedcustomersCannibalizationcustomersNet newcustomersShare% of all demandWithin 1 kmcustomers');
+    expect(rows[1]).toHaveTextContent('1Harbour Steps1,8402,6007601,8405.2 %3,10011,20019,800');
     expect(rows[3]).toHaveTextContent('Gull Terrace');
-    expect(within(table).getByRole('columnheader', { name: 'Within 3 km' })).toBeInTheDocument();
+    expect(within(table).getByRole('columnheader', { name: 'Within 3 km customers' })).toBeInTheDocument();
     expect(screen.queryByRole('progressbar', { name: /Progress of/ })).not.toBeInTheDocument();
     expect(screen.getByText(/Leases, zoning and local rules need review by licensed professionals/)).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Report (XLSX)' })).toHaveAttribute('href', expect.stringMatching(/\/api\/organizations\/org_1\/workspaces\/wsp_1\/scoring-runs\/scr_1\/export\.xlsx$/));
