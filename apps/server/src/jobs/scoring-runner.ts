@@ -7,10 +7,10 @@ import { AppError } from '../modules/common/errors.js';
 import { scoringInputLoad, scoringStabilityInputLoad } from '../modules/scoring/scoring-input.js';
 import { ScoringRunSchema } from '../modules/scoring/scoring-run.entity.js';
 import { scoringRecoverStale, scoringStabilityFail, SCORING_STALE_MS } from '../modules/scoring/scoring-run.repository.js';
-import { scoringJoin, type ScoringComputeInput, type ScoringComputeOutput } from '../modules/scoring/scoring-compute.js';
+import { scoringJoin, scoringWork, type ScoringComputeInput, type ScoringComputeOutput } from '../modules/scoring/scoring-compute.js';
 import type { SiteSetParts } from '../modules/scoring/scoring-set.js';
-import { scoringWorkerFile, type ScoringWorkerInput, type ScoringWorkerMessage } from './scoring-worker.js';
-import { workerStart } from './surface-worker-start.js';
+import type { ScoringWorkerInput } from './scoring-worker.js';
+import { scoringWorkerRun, type ScoringWorkerOutcome } from './scoring-worker-run.js';
 
 /** Runner settings. */
 export interface ScoringRunnerOptions {
@@ -28,7 +28,7 @@ export interface ScoringRunnerOptions {
   log: Logger;
 }
 
-type Outcome = Exclude<ScoringWorkerMessage, { type: 'progress' }>;
+type Outcome = ScoringWorkerOutcome;
 
 /** Progress rows are written at least this far apart (ms). */
 const PROGRESS_WRITE_MS = 250;
@@ -176,27 +176,12 @@ export class ScoringRunner {
   }
 
   private work(runId: string | null, job: ScoringWorkerInput, transfer: ArrayBuffer[], onProgress?: (f: number) => void): Promise<Outcome> {
-    return new Promise((resolve, reject) => {
-      const key = randomUUID();
-      const worker = workerStart(scoringWorkerFile());
-      this.workers.set(key, { runId, worker });
-      let settled = false;
-      const done = (fn: () => void): void => {
-        if (settled) return;
-        settled = true;
-        this.workers.delete(key);
-        fn();
-        void worker.terminate();
-      };
-      worker.on('message', (m: ScoringWorkerMessage) => {
-        if (m.type === 'progress') onProgress?.(m.fraction);
-        else done(() => resolve(m));
-      });
-      worker.on('error', (err) => done(() => reject(err)));
-      worker.on('exit', (code) => done(() => reject(new Error(`the scoring worker stopped (exit code ${code})`))));
-      worker.postMessage(job, transfer);
-    });
+    const key = randomUUID();
+    const { worker, outcome } = scoringWorkerRun(job, transfer, onProgress);
+    this.workers.set(key, { runId, worker });
+    return outcome.finally(() => this.workers.delete(key));
   }
+
 
   private async score(runId: string): Promise<void> {
     const claim = { id: runId, claimedBy: this.id };
@@ -233,21 +218,13 @@ export class ScoringRunner {
     }
   }
 
-  /** Demand cells × candidates × (own stores + 1): the Huff passes a run needs. */
-  private static workOf(input: ScoringComputeInput): number {
-    let cells = 0;
-    for (let c = 0; c < input.raster.length; c++) if (input.raster[c] > 0) cells++;
-    const candidates = input.sites.filter((s) => s.kind === 'candidate').length;
-    return cells * candidates * (input.sites.filter((s) => s.kind === 'own').length + 1);
-  }
-
   /**
    * One worker, or — for a large run when a second slot is free — two workers over the two
    * halves of the grid rows, joined here (every score is a sum over cells).
    */
   private async scoreOrSplit(runId: string, input: ScoringComputeInput, onProgress: (f: number) => void): Promise<Outcome> {
     const h = input.grid.height;
-    const split = h >= 2 && this.running < this.options.concurrency && ScoringRunner.workOf(input) >= (this.options.splitMinWork ?? 2e8);
+    const split = h >= 2 && this.running < this.options.concurrency && scoringWork(input) >= (this.options.splitMinWork ?? 2e8);
     if (!split) return this.work(runId, { mode: 'score', input }, [input.raster.buffer as ArrayBuffer], onProgress);
     this.running++;
     try {

@@ -159,6 +159,21 @@ export function scoringPartCompute(input: ScoringComputeInput, rows: [number, nu
 }
 
 /**
+ * How much Huff work a run is: demand cells × candidates × (own stores + 1) — one pass per
+ * candidate plus one per own store for the cannibalization split.
+ * @param input the run's input
+ * @returns the number of cell terms
+ * @example
+ * if (scoringWork(input) > 2e8) … // split over two threads
+ */
+export function scoringWork(input: ScoringComputeInput): number {
+  let cells = 0;
+  for (let c = 0; c < input.raster.length; c++) if (input.raster[c] > 0) cells++;
+  const candidates = input.sites.filter((s) => s.kind === 'candidate').length;
+  return cells * candidates * (input.sites.filter((s) => s.kind === 'own').length + 1);
+}
+
+/**
  * Joins the parts of a split run (core `siteScoresFromParts`) and ranks and explains as
  * {@link scoringCompute} does.
  * @param input the run's input (its raster is only read for the grid and warnings)
