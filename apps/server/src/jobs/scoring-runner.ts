@@ -22,7 +22,8 @@ export interface ScoringRunnerOptions {
   staleMs?: number;
   /**
    * Runs with at least this many cell × candidate × (own stores + 1) terms are split by grid rows
-   * over two worker threads when a second slot is free (default 2e8; 0 splits every run).
+   * over two worker threads when a second slot is free (default 1e9 ≈ a second or more of Huff passes,
+   * where the second thread pays for its start; 0 splits every run).
    */
   splitMinWork?: number;
   log: Logger;
@@ -224,7 +225,7 @@ export class ScoringRunner {
    */
   private async scoreOrSplit(runId: string, input: ScoringComputeInput, onProgress: (f: number) => void): Promise<Outcome> {
     const h = input.grid.height;
-    const split = h >= 2 && this.running < this.options.concurrency && scoringWork(input) >= (this.options.splitMinWork ?? 2e8);
+    const split = h >= 2 && this.running < this.options.concurrency && scoringWork(input) >= (this.options.splitMinWork ?? 1e9);
     if (!split) return this.work(runId, { mode: 'score', input }, [input.raster.buffer as ArrayBuffer], onProgress);
     this.running++;
     try {

@@ -164,7 +164,7 @@ export function scoringPartCompute(input: ScoringComputeInput, rows: [number, nu
  * @param input the run's input
  * @returns the number of cell terms
  * @example
- * if (scoringWork(input) > 2e8) … // split over two threads
+ * if (scoringWork(input) > 1e9) … // split over two threads
  */
 export function scoringWork(input: ScoringComputeInput): number {
   let cells = 0;
