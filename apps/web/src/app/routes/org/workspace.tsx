@@ -1,6 +1,6 @@
 import { Button, Card, CardHeader, Dialog, Spinner } from '@demandscape/ui';
 import type { QueryClient } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getCustomerFilesQueryOptions, useCustomerFiles } from '../../../features/customer-files/api/get-customer-files';
@@ -79,6 +79,11 @@ export default function WorkspaceRoute() {
   // The scoring panel sets it through `setSiteLabels` (its `onSiteLabels` prop) and clears it with {}.
   const [siteLabels, setSiteLabels] = useState<Record<string, string>>({});
   const hasImported = files.data?.some((f) => f.status === 'imported');
+  // One array per change of the sites or labels, so the map redraws its sites only then.
+  const mapSites = useMemo<MapSite[]>(
+    () => (sites.data ?? []).map((s) => ({ id: s.id, name: s.name, kind: s.kind, lon: s.lon, lat: s.lat, label: siteLabels[s.id] })),
+    [sites.data, siteLabels],
+  );
 
   // On arrival, open the next step to do (planners: the sites; others: customers first, then the
   // surface); after that the step only changes when the user picks one, so a finished import does
@@ -100,7 +105,6 @@ export default function WorkspaceRoute() {
   const sources = imported.map((f) => ({ id: f.id, name: f.name, acceptedCount: f.acceptedCount - f.excludedCount, weightLabel: f.weightLabel }));
   const siteList = sites.data ?? [];
   const selectedSite = siteList.find((s) => s.id === selectedSiteId) ?? null;
-  const mapSites: MapSite[] = siteList.map((s) => ({ id: s.id, name: s.name, kind: s.kind, lon: s.lon, lat: s.lat, label: siteLabels[s.id] }));
   const editingSites = step === 'sites' && canWriteSites;
   const siteProps: SurfaceMapSiteProps = {
     sites: canReadSites ? mapSites : undefined,

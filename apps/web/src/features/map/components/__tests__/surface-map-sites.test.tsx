@@ -157,6 +157,21 @@ describe('SurfaceMap with sites', () => {
     expect(onSiteMove).toHaveBeenCalledTimes(1);
   });
 
+  it('moves a site with one finger too, and leaves two-finger gestures to the map', async () => {
+    const onSiteMove = vi.fn();
+    renderWithProviders(<SurfaceMap scope={scope} surface={surface} customerFile={null} role="planner" sites={sites} onSiteMove={onSiteMove} />);
+    const map = await sitesLayer();
+    const pinch = { ...at(-38.47, 44.49), type: 'touchstart', points: [{}, {}], features: [{ properties: { id: 'site_2' } }] };
+    act(() => map.fire('touchstart:ds-sites', pinch));
+    expect(pinch.preventDefault).not.toHaveBeenCalled();
+    const touch = { ...at(-38.47, 44.49), type: 'touchstart', points: [{}], features: [{ properties: { id: 'site_2' } }] };
+    act(() => map.fire('touchstart:ds-sites', touch));
+    expect(touch.preventDefault).toHaveBeenCalled();
+    act(() => map.fire('touchmove', at(-38.46, 44.495)));
+    act(() => map.fire('touchend', at(-38.46, 44.495)));
+    expect(onSiteMove).toHaveBeenCalledWith('site_2', { lon: -38.46, lat: 44.495 });
+  });
+
   it('does not drag without onSiteMove (the map pans as usual)', async () => {
     renderWithProviders(<SurfaceMap scope={scope} surface={surface} customerFile={null} role="analyst" sites={sites} />);
     const map = await sitesLayer();
