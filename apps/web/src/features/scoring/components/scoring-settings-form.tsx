@@ -13,7 +13,7 @@ import {
   type ScoringSettingsFormValues,
 } from '../api/update-scoring-settings';
 import type { ScoringSettingsJson } from '../types';
-import { measureOptions, settingExplanations } from '../utils/scoring-explanations';
+import { measureLabel, measureOptions, settingExplanations } from '../utils/scoring-explanations';
 import { RadiiEditor } from './radii-editor';
 
 export type ScoringSettingsFormProps = { orgId: string; workspaceId: string; canWrite: boolean };
@@ -117,10 +117,10 @@ function SettingsEditor({ orgId, workspaceId, settings }: { orgId: string; works
 }
 
 function SettingsSummary({ settings }: { settings: ScoringSettingsJson }) {
-  const ring = /^ring:(\d+)$/.exec(settings.measure);
-  const measure = ring
-    ? `Demand within ${settings.radii[Number(ring[1])]} ${settings.radiusUnit}`
-    : (measureOptions.find((m) => m.value === settings.measure)?.label ?? settings.measure);
+  const measure = measureLabel(
+    settings.measure,
+    settings.radii.map((r) => `${r} ${settings.radiusUnit}`),
+  );
   return (
     <dl aria-label="Scoring settings" className="grid gap-x-6 gap-y-1 text-sm tabular-nums sm:grid-cols-[auto_1fr]">
       <dt className="text-ink-muted">Attractiveness exponent α</dt>

@@ -10,7 +10,7 @@ export const settingExplanations = {
     'Rings around each site: the demand inside each is shown beside the score. Suggested 1, 3 and 5 km: a walk, a short drive and a longer drive.',
   measure: 'What orders the ranking. Net new demand (suggested) counts only what a site adds to the chain, not what it takes from our own stores.',
   minDistance:
-    'Demand right on top of a store would otherwise count as infinitely close. Blank (suggested) uses half a grid cell, about the average distance within a cell.',
+    'Demand right on top of a store would otherwise count as infinitely close and take all the pull. Blank (suggested) uses half a grid cell: demand in a store’s own cell counts as half a cell away.',
 };
 
 /** The ranking measures in plain words; ring measures are added per ring. */

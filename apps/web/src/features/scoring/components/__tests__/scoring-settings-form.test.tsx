@@ -92,10 +92,11 @@ describe('ScoringSettingsForm', () => {
   });
 
   it('shows analysts and executives the settings without a form', async () => {
-    server.use(http.get(url, () => HttpResponse.json({ settings: createScoringSettings({ beta: 2.5, radiusUnit: 'mi', radii: [1, 2] }) })));
+    server.use(http.get(url, () => HttpResponse.json({ settings: createScoringSettings({ beta: 2.5, radiusUnit: 'mi', radii: [1, 2], measure: 'ring:1' }) })));
     renderWithProviders(<ScoringSettingsForm orgId="org_1" workspaceId="wsp_1" canWrite={false} />);
     expect(await screen.findByText('1 mi, 2 mi')).toBeInTheDocument();
     expect(screen.getByText('2.5')).toBeInTheDocument();
+    expect(screen.getByText('Demand within 2 mi')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Save settings' })).not.toBeInTheDocument();
     expect(screen.queryByRole('textbox')).not.toBeInTheDocument();
   });
