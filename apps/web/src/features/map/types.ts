@@ -16,6 +16,12 @@ export type MapSurface = {
 /** The fields of the surface's customer file the legend needs (`GET …/customer-files/:id`). */
 export type MapCustomerFile = { id: string; name: string; weightKind: WeightKind; weightLabel: string | null };
 
+/**
+ * The legend's weight words without a customer file: what the weight counts and the analyst's label
+ * for it (e.g. `{ kind: 'other', label: 'annual spend (€)' }`); a `count` kind reads "customers".
+ */
+export type MapWeight = { kind: WeightKind; label: string | null };
+
 /** Where the map's requests go: the organization and workspace of the study. */
 export type MapScope = { orgId: string; workspaceId: string };
 

@@ -112,6 +112,26 @@ describe('the read-only shortlist page', () => {
     expect(screen.queryByRole('checkbox')).not.toBeInTheDocument();
   }, 20_000);
 
+  it('hands the map the version’s weight words for an executive, who gets no customer file', async () => {
+    signedInAs('executive');
+    let fileRequests = 0;
+    server.use(
+      http.get(`${ws}/shortlists/shl_1`, () =>
+        HttpResponse.json({ shortlist: createShortlist({ latestVersion: 2, version: createShortlistVersion({ version: 2, weightLabel: 'annual spend (€)' }) }) }),
+      ),
+      http.get(`${ws}/customer-files/:id`, () => {
+        fileRequests += 1;
+        return HttpResponse.json({ customerFile: createImportedCustomerFile() });
+      }),
+    );
+    renderApp('/orgs/org_1/shortlists/shl_1');
+    expect(await screen.findByRole('img', { name: 'Map of Harbour customers 2026' }, { timeout: 15_000 })).toBeInTheDocument();
+    const last = mapProps[mapProps.length - 1]!;
+    expect(last.customerFile).toBeNull();
+    expect(last.weight).toEqual({ kind: 'other', label: 'annual spend (€)' });
+    expect(fileRequests).toBe(0);
+  }, 20_000);
+
   it('switches versions from the picker through the address', async () => {
     const requested = signedInAs('executive');
     const { router } = renderApp('/orgs/org_1/shortlists/shl_1');

@@ -65,6 +65,10 @@ export default function ShortlistRoute() {
   // Legend words come from the customer file's metadata; executives get no customer file at all.
   const showFile = role !== 'executive' && Boolean(surface.data?.customerFileId);
   const file = useQuery({ ...getCustomerFileQueryOptions(orgId, workspaceId, surface.data?.customerFileId ?? ''), enabled: showFile });
+  // Without the file (executives) the legend reads the run's weight label saved with the version; the runs
+  // call an unweighted file's demand "customers".
+  const weightLabel = v?.weightLabel.trim() ?? '';
+  const weight = weightLabel && weightLabel !== 'customers' ? { kind: 'other' as const, label: weightLabel } : { kind: 'count' as const, label: null };
   // Chosen candidates labelled with their order, plus the own stores and competitors they were scored against.
   const sites = useMemo(() => (v ? shortlistMapSites(v) : []), [v]);
 
@@ -120,6 +124,7 @@ export default function ShortlistRoute() {
                   ? { id: file.data.id, name: file.data.name, weightKind: file.data.weightKind ?? 'count', weightLabel: file.data.weightLabel }
                   : null
               }
+              weight={weight}
               role={role}
               sites={sites}
             />

@@ -13,7 +13,7 @@ import { useRasterImage } from '../hooks/use-raster-image';
 import { useSyncedCameras } from '../hooks/use-synced-cameras';
 import { demoBasemapStyle } from '../lib/basemap-style';
 import type { SitesOnMap } from '../hooks/use-sites-on-map';
-import type { MapCustomerFile, MapScope, MapSurface } from '../types';
+import type { MapCustomerFile, MapScope, MapSurface, MapWeight } from '../types';
 import { densityUnitLabel } from '../utils/density-unit';
 import { rasterValueAt } from '../utils/web-raster';
 import { CompareControls, type CompareMode } from './compare-controls';
@@ -38,6 +38,11 @@ type SurfaceMapOwnProps = {
   surface: MapSurface;
   /** The surface's customer file (legend words; the customer bins toggle). */
   customerFile: MapCustomerFile | null;
+  /**
+   * The legend's weight words when there is no customer file to read them from (an executive's view,
+   * which never gets the file); a customer file, when passed, wins. Without either: customers.
+   */
+  weight?: MapWeight;
   /** The viewer's role: aggregated customers only for owners and analysts. */
   role: Role | undefined;
   /** Other surfaces of the workspace to compare with (succeeded ones are offered). */
@@ -51,11 +56,12 @@ export type SurfaceMapProps = SurfaceMapOwnProps & SurfaceMapSiteProps;
  * surface with opacity, legend in real units, contour switches, the value under the cursor, the
  * aggregated customer view for owners and analysts, a comparison with a second surface, and the
  * study's sites (see `SurfaceMapSiteProps`). Without a surface, `BasemapSiteMap` shows the sites alone.
- * @param props the study scope, the surface, its customer file, the viewer's role, surfaces to compare with, sites
+ * @param props the study scope, the surface, its customer file (or the weight words alone), the viewer's role, surfaces to compare with, sites
  * @returns the map panel
  * @example <SurfaceMap scope={{ orgId, workspaceId }} surface={surface} customerFile={file} role={role} compareCandidates={surfaces} sites={sites} onSiteSelect={select} />
+ * @example <SurfaceMap scope={scope} surface={surface} customerFile={null} weight={{ kind: 'other', label: 'annual spend (€)' }} role="executive" />
  */
-export function SurfaceMap({ scope, surface, customerFile, role, compareCandidates = [], ...siteProps }: SurfaceMapProps) {
+export function SurfaceMap({ scope, surface, customerFile, weight, role, compareCandidates = [], ...siteProps }: SurfaceMapProps) {
   const styleUrl = env.VITE_BASEMAP_STYLE_URL;
   const basemap = useDemoBasemap(!styleUrl);
   const ready = surface.status === 'succeeded';
@@ -85,8 +91,9 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
 
   const style = useMemo(() => (styleUrl ? styleUrl : basemap.data ? demoBasemapStyle(basemap.data) : null), [styleUrl, basemap.data]);
   const customerColours = useMemo(() => customerColourStops(Math.max(0, ...(bins.data?.features.map((f) => f.properties.count) ?? [0]))), [bins.data]);
-  const weightKind = customerFile?.weightKind ?? 'count';
-  const unitText = densityUnitLabel(weightKind, surface.params.unit, customerFile?.weightLabel);
+  const weightKind = customerFile ? customerFile.weightKind : (weight?.kind ?? 'count');
+  const weightLabel = customerFile ? customerFile.weightLabel : weight?.label;
+  const unitText = densityUnitLabel(weightKind, surface.params.unit, weightLabel);
 
   if (!ready) {
     return (
@@ -156,7 +163,7 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
               selectedSiteId={siteProps.selectedSiteId}
             />
             <div className="pointer-events-none absolute top-2 right-2 max-w-[70%]">
-              <HoverReadout value={rightValue} unitText={densityUnitLabel(weightKind, other.params.unit, customerFile?.weightLabel)} />
+              <HoverReadout value={rightValue} unitText={densityUnitLabel(weightKind, other.params.unit, weightLabel)} />
             </div>
             <p className="absolute bottom-2 left-2 rounded-control bg-surface/90 px-2 py-1 text-xs text-ink">{other.name}</p>
           </div>
@@ -166,7 +173,7 @@ export function SurfaceMap({ scope, surface, customerFile, role, compareCandidat
         <SurfaceLegend
           unit={surface.params.unit}
           weightKind={weightKind}
-          weightLabel={customerFile?.weightLabel}
+          weightLabel={weightLabel}
           scaleTop={main.scaleTop}
           mode={showDifference ? 'difference' : 'surface'}
           compareName={other?.name}

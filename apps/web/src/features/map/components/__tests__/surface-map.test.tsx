@@ -114,6 +114,28 @@ describe('SurfaceMap', () => {
     expect(screen.getByText('4.79 sq mi')).toBeInTheDocument(); // 12.4 km² / 2.589988 km² per sq mi
   });
 
+  it('words the legend from the weight prop when there is no customer file, and never asks for customers', async () => {
+    let aggregateCalls = 0;
+    server.use(
+      http.get(`${base}/customer-files/:id/aggregate`, () => {
+        aggregateCalls += 1;
+        return HttpResponse.json({ error: { code: 'FORBIDDEN', message: 'Not for executives.' } }, { status: 403 });
+      }),
+    );
+    renderWithProviders(
+      <SurfaceMap scope={scope} surface={createMapSurface()} customerFile={null} weight={{ kind: 'other', label: 'annual spend (€)' }} role="executive" />,
+    );
+    expect(await screen.findByText('(annual spend (€) per km²)')).toBeInTheDocument();
+    expect(screen.queryByText(/customers per km²/)).not.toBeInTheDocument();
+    const map = await loadedMap();
+    const hot = rasterPixelCentre({ ...SIZE, bounds: BOUNDS }, HOT.col, HOT.row);
+    act(() => map.fire('mousemove', { lngLat: { lng: hot.lon, lat: hot.lat } }));
+    expect(await screen.findByText('437 annual spend (€) per km²')).toBeInTheDocument();
+    expect(screen.queryByLabelText(/Show customers/)).not.toBeInTheDocument();
+    expect(map.layers.get('ds-customers')).toBeUndefined();
+    expect(aggregateCalls).toBe(0);
+  });
+
   it('places the coloured raster at the server’s bounds and draws the contours under the switches', async () => {
     renderWithProviders(<SurfaceMap scope={scope} surface={createMapSurface()} customerFile={countFile} role="planner" />);
     const map = await loadedMap();
