@@ -183,6 +183,21 @@ describe('the shortlists list', () => {
     expect(within(nav).getByRole('link', { name: 'Shortlists' })).toHaveAttribute('href', '/orgs/org_1/shortlists');
   }, 20_000);
 
+  it('is where "/" takes an executive', async () => {
+    signedInAs('executive');
+    const { router } = renderApp('/');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Shortlists' }, { timeout: 15_000 })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/orgs/org_1/shortlists');
+  }, 20_000);
+
+  it('keeps "/" on workspaces for planners', async () => {
+    signedInAs('planner');
+    server.use(http.get('*/api/organizations/org_1/workspaces', () => HttpResponse.json({ workspaces: [] })));
+    const { router } = renderApp('/');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Workspaces' }, { timeout: 15_000 })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/orgs/org_1/workspaces');
+  }, 20_000);
+
   it('keeps workspaces as the landing page for planners', async () => {
     signedInAs('planner');
     server.use(http.get('*/api/organizations/org_1/workspaces', () => HttpResponse.json({ workspaces: [] })));
