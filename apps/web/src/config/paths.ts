@@ -28,7 +28,9 @@ export const paths = {
     workspaces: { path: 'workspaces', getHref: (orgId: string) => `/orgs/${orgId}/workspaces` },
     workspace: {
       path: 'workspaces/:workspaceId',
-      getHref: (orgId: string, workspaceId: string) => `/orgs/${orgId}/workspaces/${workspaceId}`,
+      /** `step` opens that study step's panel (customers, surface, sites or shortlist). */
+      getHref: (orgId: string, workspaceId: string, step?: 'customers' | 'surface' | 'sites' | 'shortlist') =>
+        `/orgs/${orgId}/workspaces/${workspaceId}${step ? `?step=${step}` : ''}`,
     },
     members: { path: 'members', getHref: (orgId: string) => `/orgs/${orgId}/members` },
     auditLog: { path: 'audit-log', getHref: (orgId: string) => `/orgs/${orgId}/audit-log` },

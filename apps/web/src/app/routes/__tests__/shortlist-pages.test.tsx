@@ -148,7 +148,7 @@ describe('the read-only shortlist page', () => {
     signedInAs('planner');
     renderApp('/orgs/org_1/shortlists/shl_1');
     const edit = await screen.findByRole('link', { name: 'Edit in workspace' }, { timeout: 15_000 });
-    expect(edit).toHaveAttribute('href', '/orgs/org_1/workspaces/wsp_1');
+    expect(edit).toHaveAttribute('href', '/orgs/org_1/workspaces/wsp_1?step=shortlist');
     await expect.poll(() => mapProps[mapProps.length - 1]?.customerFile?.id).toBe('cf_1');
   }, 20_000);
 

@@ -68,8 +68,8 @@ describe('the workspace study page, step 3', () => {
     studyAs('planner');
     expect(await screen.findByRole('heading', { name: '3 · Sites & scoring' }, { timeout: 15_000 })).toBeInTheDocument();
     const outline = screen.getByRole('list', { name: 'Study steps' });
-    expect(await within(outline).findByText('Sites placed')).toBeInTheDocument();
-    expect(within(outline).getByText('2 candidates, 1 own store, 1 competitor.')).toBeInTheDocument();
+    expect(await within(outline).findByText('4 sites')).toBeInTheDocument();
+    expect(within(outline).getByText('4 sites: 2 candidates, 1 own store, 1 competitor.')).toBeInTheDocument();
     await waitFor(() => expect(lastBasemap().sites?.map((s) => s.name)).toEqual(['Quay corner', 'Lantern Yard', 'Harbour Row', 'Crumbhall Mill Street']));
     expect(lastBasemap().sites?.[2]).toEqual({ id: 'site_2', name: 'Harbour Row', kind: 'own', lon: -38.47, lat: 44.49, label: undefined });
     expect(lastBasemap().onSiteMove).toBeTypeOf('function');

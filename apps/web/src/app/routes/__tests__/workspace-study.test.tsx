@@ -21,6 +21,9 @@ function studyAs(role: Role, options: { files?: unknown[]; surfaces?: unknown[] 
     http.get(`${ws}/customer-files/cf_1`, () => HttpResponse.json({ customerFile: createImportedCustomerFile() })),
     http.get(`${ws}/surfaces`, () => HttpResponse.json({ surfaces: options.surfaces ?? [] })),
     http.get(`${ws}/sites`, () => HttpResponse.json({ sites: [] })),
+    // The outline reads the runs and shortlists for steps 3 and 4.
+    http.get(`${ws}/scoring-runs`, () => HttpResponse.json({ runs: [] })),
+    http.get(`${ws}/shortlists`, () => HttpResponse.json({ shortlists: [] })),
     http.get(`${ws}/surfaces/srf_1`, () => HttpResponse.json({ surface: (options.surfaces ?? [])[0] })),
     http.post(`${ws}/surfaces/estimate`, () => HttpResponse.json(createSurfaceEstimate())),
   );

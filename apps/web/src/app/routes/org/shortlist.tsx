@@ -99,7 +99,7 @@ export default function ShortlistRoute() {
           </div>
         </div>
         {roleCan(role, 'shortlist:write') ? (
-          <Link className="text-sm font-medium text-accent hover:underline" to={paths.org.workspace.getHref(orgId, s.workspaceId)}>
+          <Link className="text-sm font-medium text-accent hover:underline" to={paths.org.workspace.getHref(orgId, s.workspaceId, 'shortlist')}>
             Edit in workspace
           </Link>
         ) : null}

@@ -1,7 +1,7 @@
 import { Button, Card, CardHeader, Dialog, Spinner } from '@demandscape/ui';
 import type { QueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useState } from 'react';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
 import { getCustomerFilesQueryOptions, useCustomerFiles } from '../../../features/customer-files/api/get-customer-files';
 import { CustomerFilesStep } from '../../../features/customer-files/components/customer-files-step';
@@ -9,7 +9,9 @@ import { BasemapSiteMap } from '../../../features/map/components/basemap-site-ma
 import { SiteSymbol } from '../../../features/map/components/site-legend';
 import { SurfaceMap, type SurfaceMapSiteProps } from '../../../features/map/components/surface-map';
 import type { MapSite } from '../../../features/map/types';
+import { useScoringRuns } from '../../../features/scoring/api/get-scoring-runs';
 import { ScoringStep } from '../../../features/scoring/components/scoring-step';
+import { useShortlists } from '../../../features/shortlists/api/get-shortlists';
 import { ShortlistStep } from '../../../features/shortlists/components/shortlist-step';
 import { getSitesQueryOptions, useSites } from '../../../features/sites/api/get-sites';
 import { useUpdateSite } from '../../../features/sites/api/update-site';
@@ -29,7 +31,7 @@ import { roleCan } from '../../../lib/authorization';
 import { dateText } from '../../../lib/format';
 import { useOrgContext } from './org-context';
 import { orgMembership } from './org-membership';
-import { customersState, sitesState, surfaceState } from './workspace-step-states';
+import { customersState, shortlistState, sitesState, surfaceState } from './workspace-step-states';
 
 /**
  * Loads the workspace before the page shows; a missing one (or another organization's) becomes the 404 page.
@@ -56,7 +58,14 @@ export const clientLoader =
 const openSteps = ['customers', 'surface', 'sites', 'shortlist'] as const satisfies readonly StudyStepKey[];
 type OpenStep = (typeof openSteps)[number];
 
-/** One study: its four steps on the left, the map in the middle, the inspector on the right, the open step below. */
+function stepFrom(value: string | null): OpenStep | null {
+  return openSteps.find((s) => s === value) ?? null;
+}
+
+/**
+ * One study: its four steps on the left, the map in the middle, the inspector on the right, the open step below.
+ * `?step=customers|surface|sites|shortlist` opens that step (links from other pages); choosing a step keeps the address in step.
+ */
 export default function WorkspaceRoute() {
   const { orgId, role } = useOrgContext();
   const { workspaceId = '' } = useParams();
@@ -69,7 +78,10 @@ export default function WorkspaceRoute() {
   const canWriteSites = roleCan(role, 'site:write');
   const sites = useSites(orgId, workspaceId, canReadSites);
   const moveSite = useUpdateSite(orgId, workspaceId);
-  const [chosenStep, setChosenStep] = useState<OpenStep | null>(null);
+  const [search, setSearch] = useSearchParams();
+  const [chosenStep, setChosenStep] = useState<OpenStep | null>(() => stepFrom(search.get('step')));
+  const runs = useScoringRuns(orgId, workspaceId);
+  const shortlists = useShortlists(orgId, workspaceId);
   const [chosenSurfaceId, setChosenSurfaceId] = useState<string | null>(null);
   const [selectedSiteId, setSelectedSiteId] = useState<string | null>(null);
   // "Add on map": while on (sites step, writers), a click on the map is a position for the site form.
@@ -149,10 +161,18 @@ export default function WorkspaceRoute() {
         <Card className="p-2">
           <h2 className="px-3 pt-2 text-xs font-semibold tracking-wide text-ink-faint uppercase">Study outline</h2>
           <StudyOutline
-            states={{ customers: customersState(files.data), surface: surfaceState(surfaces.data), sites: sitesState(sites.data) }}
+            states={{
+              customers: customersState(files.data),
+              surface: surfaceState(surfaces.data),
+              sites: sitesState(sites.data, runs.data),
+              shortlist: shortlistState(shortlists.data),
+            }}
             activeKey={step}
             selectable={openSteps}
-            onSelect={(key) => setChosenStep(key as OpenStep)}
+            onSelect={(key) => {
+              setChosenStep(key as OpenStep);
+              setSearch({ step: key }, { replace: true });
+            }}
           />
         </Card>
         <section aria-label="Map">

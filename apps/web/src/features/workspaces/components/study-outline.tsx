@@ -16,7 +16,7 @@ export const studySteps = [
   },
   {
     key: 'sites',
-    title: 'Sites',
+    title: 'Sites & scoring',
     summary: 'Add candidate sites, your own stores and competitors, and score each candidate’s trade area.',
     by: 'Planners and owners',
   },
