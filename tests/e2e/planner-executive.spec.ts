@@ -342,11 +342,12 @@ describe('the planner’s and the executive’s day in a real browser', () => {
           .count(),
       ).toBe(0);
     }
-    await page
-      .locator('section[aria-label="Map"]')
-      .locator('canvas.maplibregl-canvas')
-      .first()
-      .waitFor();
+    const map = page.locator('section[aria-label="Map"]');
+    await map.locator('canvas.maplibregl-canvas').first().waitFor();
+    // Without the customer file (executives get none) the legend still names the demo weight.
+    await map.getByText('(annual spend (€) per km²)').waitFor();
+    expect(await map.getByText(/customers per km²/).count()).toBe(0);
+    await map.getByRole('list', { name: 'Site symbols' }).getByText('(3)').waitFor();
     await page.waitForTimeout(2000);
     await shot('09-executive-shortlist');
   }, 120_000);
