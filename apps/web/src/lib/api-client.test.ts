@@ -86,6 +86,25 @@ describe('apiRequest', () => {
     expect(error).toMatchObject({ status: 0, code: 'NETWORK_ERROR' });
   });
 
+  it('returns the JSON body of a 202 Accepted, with the CSRF retry like any mutation', async () => {
+    const tokens = ['stale-token', 'fresh-token'];
+    resetCsrfToken();
+    server.use(
+      http.get('*/api/auth/csrf', () => HttpResponse.json({ csrfToken: tokens.shift() })),
+      http.post('*/api/runs', ({ request }) =>
+        request.headers.get('x-csrf-token') === 'fresh-token'
+          ? HttpResponse.json({ run: { id: 'scr_1', status: 'queued' } }, { status: 202 })
+          : HttpResponse.json({ error: { code: 'CSRF_INVALID', message: 'Bad token.' } }, { status: 403 }),
+      ),
+    );
+    await expect(api.post('/runs', { surfaceId: 'srf_1' })).resolves.toEqual({ run: { id: 'scr_1', status: 'queued' } });
+  });
+
+  it('returns undefined for a 202 Accepted without a body', async () => {
+    server.use(http.post('*/api/things', () => new HttpResponse(null, { status: 202 })));
+    await expect(api.post('/things', {})).resolves.toBeUndefined();
+  });
+
   it('returns undefined for 204 No Content', async () => {
     server.use(http.delete('*/api/things', () => new HttpResponse(null, { status: 204 })));
     await expect(api.delete('/things')).resolves.toBeUndefined();

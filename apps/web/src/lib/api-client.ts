@@ -95,7 +95,7 @@ export async function csrfTokenFor(): Promise<string> {
  * @param method HTTP method
  * @param path path under `/api`, e.g. `/organizations`
  * @param options JSON body, query parameters, abort signal
- * @returns the parsed JSON body, or `undefined` for 204/202 without content
+ * @returns the parsed JSON body (202 Accepted included), or `undefined` for 204 or an empty body
  * @example const { workspaces } = await apiRequest<{ workspaces: Workspace[] }>('GET', `/organizations/${id}/workspaces`);
  */
 export async function apiRequest<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
@@ -109,7 +109,8 @@ export async function apiRequest<T>(method: Method, path: string, options: Reque
     }
   }
   if (!response.ok) throw await errorFrom(response);
-  if (response.status === 204 || response.status === 202) return undefined as T;
+  if (response.status === 204) return undefined as T;
+  // 202 Accepted may carry a body (a queued run, an importing file); it is parsed like any other.
   const text = await response.text();
   return (text ? JSON.parse(text) : undefined) as T;
 }

@@ -29,7 +29,7 @@ export type ImportCustomerFileInput = z.infer<typeof importCustomerFileInputSche
  * @param workspaceId the workspace
  * @param fileId the uploaded file
  * @param input column choices, weight kind and label, whether to leave flagged outliers out
- * @returns the file, now `importing` (null: the API client drops 202 bodies, so the poll fetches it)
+ * @returns the file, now `importing` (the 202 Accepted body)
  * @example await importCustomerFile(o, w, f, { lon: 'x', lat: 'y', weight: '', weightKind: 'count', weightLabel: '', excludeFlagged: false })
  */
 export async function importCustomerFile(
@@ -37,14 +37,14 @@ export async function importCustomerFile(
   workspaceId: string,
   fileId: string,
   input: ImportCustomerFileInput,
-): Promise<CustomerFile | null> {
-  const body = await api.post<{ customerFile: CustomerFile } | undefined>(`${customerFilesPath(orgId, workspaceId)}/${fileId}/import`, {
+): Promise<CustomerFile> {
+  const body = await api.post<{ customerFile: CustomerFile }>(`${customerFilesPath(orgId, workspaceId)}/${fileId}/import`, {
     mapping: { lon: input.lon, lat: input.lat, ...(input.weight ? { weight: input.weight } : {}) },
     weightKind: input.weightKind,
     ...(input.weightLabel ? { weightLabel: input.weightLabel } : {}),
     excludeFlagged: input.excludeFlagged,
   });
-  return body?.customerFile ?? null;
+  return body.customerFile;
 }
 
 /**
@@ -60,7 +60,7 @@ export function useImportCustomerFile(
   orgId: string,
   workspaceId: string,
   fileId: string,
-  config: MutationConfig<ImportCustomerFileInput, CustomerFile | null> = {},
+  config: MutationConfig<ImportCustomerFileInput, CustomerFile> = {},
 ) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -69,8 +69,7 @@ export function useImportCustomerFile(
     mutationFn: (input: ImportCustomerFileInput) => importCustomerFile(orgId, workspaceId, fileId, input),
     onSuccess: async (...args) => {
       const [file] = args;
-      if (file) queryClient.setQueryData(getCustomerFileQueryOptions(orgId, workspaceId, fileId).queryKey, file);
-      else await queryClient.invalidateQueries({ queryKey: getCustomerFileQueryOptions(orgId, workspaceId, fileId).queryKey, exact: true });
+      queryClient.setQueryData(getCustomerFileQueryOptions(orgId, workspaceId, fileId).queryKey, file);
       await queryClient.invalidateQueries({ queryKey: customerFilesKey(orgId, workspaceId), exact: true });
       await config.onSuccess?.(...args);
     },

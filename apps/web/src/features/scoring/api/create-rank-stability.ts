@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
 import type { ScoringRunJson } from '../types';
 import { getScoringRunQueryOptions } from './get-scoring-run';
 import { scoringRunsPath } from './get-scoring-runs';
-import { postAccepted } from './post-accepted';
 
 /**
  * Starts the rank-stability check of a finished run: the server rescores on surfaces at 0.5×, 0.75×,
@@ -14,7 +14,7 @@ import { postAccepted } from './post-accepted';
  * @example const run = await createRankStability(orgId, wsId, runId);
  */
 export async function createRankStability(orgId: string, workspaceId: string, runId: string): Promise<ScoringRunJson> {
-  const res = await postAccepted<{ run: ScoringRunJson }>(`${scoringRunsPath(orgId, workspaceId)}/${runId}/stability`);
+  const res = await api.post<{ run: ScoringRunJson }>(`${scoringRunsPath(orgId, workspaceId)}/${runId}/stability`, {});
   return res.run;
 }
 

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
 import type { MutationConfig } from '../../../lib/react-query';
 import type { ScoringRunJson } from '../types';
 import { getScoringRunQueryOptions } from './get-scoring-run';
 import { scoringRunsKey, scoringRunsPath } from './get-scoring-runs';
-import { postAccepted } from './post-accepted';
 
 export type ScoringRunCreateBody = { surfaceId: string; name?: string };
 
@@ -17,7 +17,7 @@ export type ScoringRunCreateBody = { surfaceId: string; name?: string };
  * @example const run = await createScoringRun(orgId, wsId, { surfaceId });
  */
 export async function createScoringRun(orgId: string, workspaceId: string, body: ScoringRunCreateBody): Promise<ScoringRunJson> {
-  const res = await postAccepted<{ run: ScoringRunJson }>(scoringRunsPath(orgId, workspaceId), body);
+  const res = await api.post<{ run: ScoringRunJson }>(scoringRunsPath(orgId, workspaceId), body);
   return res.run;
 }
 
