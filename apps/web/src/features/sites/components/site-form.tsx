@@ -12,7 +12,7 @@ import { degreesText, siteExplanations, siteKindOrder, siteKindWords } from '../
 export type SiteFormProps = {
   orgId: string;
   workspaceId: string;
-  /** The site to edit; without it the form adds a new one. */
+  /** The site to edit, as stored now (a move elsewhere updates the form's position); without it the form adds a new one. */
   site?: Site;
   /** The last position clicked on the map; each new click fills longitude and latitude. */
   picked: SitePick | null;
@@ -59,6 +59,18 @@ export function SiteForm({ orgId, workspaceId, site, picked, defaultLabel = '', 
     form.setValue('lon', degreesText(picked.lon), { shouldValidate: true, shouldDirty: true });
     form.setValue('lat', degreesText(picked.lat), { shouldValidate: true, shouldDirty: true });
   }, [picked, seenSeq, form]);
+
+  // The site moved elsewhere (dragged on the map) while the form is open: the form follows, so saving
+  // does not put it back where it was.
+  const [seenAt, setSeenAt] = useState(site ? `${site.lon},${site.lat}` : null);
+  useEffect(() => {
+    if (!site) return;
+    const at = `${site.lon},${site.lat}`;
+    if (at === seenAt) return;
+    setSeenAt(at);
+    form.setValue('lon', degreesText(site.lon), { shouldValidate: true });
+    form.setValue('lat', degreesText(site.lat), { shouldValidate: true });
+  }, [site, seenAt, form]);
 
   const onError = (error: Error) => {
     if (!serverErrorsOnFields(error, form.setError, fieldNames)) setFormError(errorMessage(error));

@@ -70,6 +70,8 @@ export function SitesStep(props: SitesStepProps) {
   const labels = list.map((s) => s.attractivenessLabel.trim()).filter(Boolean);
   const commonLabel = labels.sort((a, b) => labels.filter((l) => l === b).length - labels.filter((l) => l === a).length)[0] ?? '';
   const units = new Set(labels);
+  // The site being edited as the list has it now, so a drag on the map while the form is open reaches the form.
+  const editedSite = editor?.mode === 'edit' ? (list.find((s) => s.id === editor.site.id) ?? editor.site) : undefined;
 
   return (
     <div className="flex flex-col gap-5">
@@ -108,7 +110,7 @@ export function SitesStep(props: SitesStepProps) {
             key={editor.mode === 'new' ? 'new' : editor.site.id}
             orgId={orgId}
             workspaceId={workspaceId}
-            site={editor.mode === 'edit' ? editor.site : undefined}
+            site={editedSite}
             picked={picked}
             defaultLabel={commonLabel}
             onDone={(site) => {

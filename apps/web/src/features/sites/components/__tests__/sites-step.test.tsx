@@ -6,6 +6,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { apiErrorResponse, hasCsrf } from '../../../../testing/mocks/handlers';
 import { server } from '../../../../testing/mocks/server';
 import { renderWithProviders } from '../../../../testing/test-utils';
+import { useUpdateSite } from '../../api/update-site';
 import { createSite, createSiteList } from '../../testing/site-factories';
 import type { Site, SitePick } from '../../types';
 import { SitesStep, type SitesStepProps } from '../sites-step';
@@ -175,6 +176,36 @@ describe('SitesStep', () => {
     await waitFor(() => expect(writes).toHaveLength(1));
     expect(writes[0]).toMatchObject({ method: 'PATCH', id: 'site_2', body: { kind: 'own', name: 'Harbour Row', lon: -38.47, lat: 44.4912, attractiveness: 210 } });
     expect(await screen.findByText('210 m² sales floor')).toBeInTheDocument();
+  });
+
+  it('follows a site dragged on the map while its edit form is open, and saves the new position', async () => {
+    const writes = sitesApi();
+    // The map's drag goes through the same mutation outside the step (the route owns the map).
+    function MapDrag() {
+      const move = useUpdateSite('org_1', 'wsp_1');
+      return (
+        <button type="button" onClick={() => move.mutate({ siteId: 'site_2', changes: { lon: -38.4601, lat: 44.4955 } })}>
+          Drag Harbour Row
+        </button>
+      );
+    }
+    renderWithProviders(
+      <>
+        <SitesStep orgId="org_1" workspaceId="wsp_1" canRead canWrite selectedId={null} onSelect={vi.fn()} pickOnMap={false} onPickOnMapChange={vi.fn()} picked={null} />
+        <MapDrag />
+      </>,
+    );
+    await userEvent.click(await screen.findByRole('button', { name: 'Edit Harbour Row' }));
+    const form = screen.getByRole('form', { name: 'Edit Harbour Row' });
+    expect(within(form).getByLabelText('Longitude')).toHaveValue('-38.47');
+    await userEvent.type(within(form).getByLabelText('Notes (optional)'), ' Back door on Rope Lane.');
+    await userEvent.click(screen.getByRole('button', { name: 'Drag Harbour Row' }));
+    await waitFor(() => expect(within(form).getByLabelText('Longitude')).toHaveValue('-38.4601'));
+    expect(within(form).getByLabelText('Latitude')).toHaveValue('44.4955');
+    expect(within(form).getByLabelText('Notes (optional)')).toHaveValue('Lease renews in 2028. Back door on Rope Lane.');
+    await userEvent.click(within(form).getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(writes).toHaveLength(2));
+    expect(writes[1]).toMatchObject({ method: 'PATCH', id: 'site_2', body: { lon: -38.4601, lat: 44.4955, notes: 'Lease renews in 2028. Back door on Rope Lane.' } });
   });
 
   it('deletes a site only after confirming', async () => {
