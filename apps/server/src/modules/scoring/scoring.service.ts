@@ -13,10 +13,12 @@ import { ScoringRunSchema, type ScoringRun } from './scoring-run.entity.js';
 import { scoringRecoverStale, scoringRunLoad, scoringRunsOfWorkspace, SCORING_STALE_MS } from './scoring-run.repository.js';
 import { scoringRunJson, scoringRunSummaryJson } from './scoring-run-view.js';
 import { scoringScopeCheck, type ScoringScope } from './scoring-scope.js';
+import { demandUnitWords } from './scoring-demand-unit.js';
 import { scoringSettingsGet } from './scoring-settings.service.js';
 import { ringRadiiMetres } from './scoring.schemas.js';
 import { STABILITY_FACTORS } from './scoring-stability.js';
 import type { RunSiteJson, ScoringRunJson, ScoringRunSummaryJson, SiteSetJson } from './scoring.types.js';
+
 
 export type { ScoringScope } from './scoring-scope.js';
 
@@ -110,7 +112,7 @@ export async function scoringRunCreate(em: EntityManager, scope: ScoringScope, a
       cellSizeM: surface.resolved.grid.cellSize,
       projection: surface.resolved.projection.label,
     },
-    weightLabel: file?.weightLabel ?? 'customers',
+    weightLabel: demandUnitWords(file),
     candidateCount,
     results: null,
     stability: null,
