@@ -109,4 +109,28 @@ describe('apiRequest', () => {
     server.use(http.delete('*/api/things', () => new HttpResponse(null, { status: 204 })));
     await expect(api.delete('/things')).resolves.toBeUndefined();
   });
+
+  it('sends a FormData body as multipart (no JSON content type) and keeps a refused import’s row errors', async () => {
+    let seen: { type: string | null; kind: string | null; file: string | null } | null = null;
+    server.use(
+      http.post('*/api/uploads', async ({ request }) => {
+        const type = request.headers.get('content-type');
+        const form = await request.formData();
+        const file = form.get('file');
+        seen = { type, kind: form.get('defaultKind') as string | null, file: file instanceof File ? await file.text() : null };
+        return HttpResponse.json(
+          { error: { code: 'SITE_ROWS_INVALID', message: '1 row of the file has errors.', rowErrors: [{ row: 2, field: 'lat', message: 'must be between -90 and 90' }] } },
+          { status: 400 },
+        );
+      }),
+    );
+    const form = new FormData();
+    form.append('defaultKind', 'candidate');
+    form.append('file', new File(['name,lon,lat\nA,1,95\n'], 'sites.csv', { type: 'text/csv' }));
+    const error = await api.post('/uploads', form).catch((e: unknown) => e);
+    expect(seen!.type).toMatch(/^multipart\/form-data; boundary=/);
+    expect(seen!.kind).toBe('candidate');
+    expect(seen!.file).toContain('A,1,95');
+    expect(error).toMatchObject({ code: 'SITE_ROWS_INVALID', details: { rowErrors: [{ row: 2, field: 'lat' }] } });
+  });
 });

@@ -34,14 +34,16 @@ function urlFor(path: string, query?: RequestOptions['query']): string {
 
 async function send(method: Method, path: string, options: RequestOptions, token: string | null): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  // A FormData body (a file upload) goes as multipart with the boundary fetch writes itself.
+  const isForm = typeof FormData !== 'undefined' && options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers['content-type'] = 'application/json';
   if (token) headers['x-csrf-token'] = token;
   try {
     return await fetch(urlFor(path, options.query), {
       method,
       headers,
       credentials: 'include',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {
@@ -60,7 +62,9 @@ async function errorFrom(response: Response): Promise<ApiError> {
   }
   if (isApiErrorBody(parsed)) {
     const { code, message, field, fields, details } = parsed.error;
-    return new ApiError(response.status, code, message, field, fields, details);
+    // A refused file import lists its bad rows beside the message; they travel in `details`.
+    const rowErrors = (parsed.error as { rowErrors?: unknown }).rowErrors;
+    return new ApiError(response.status, code, message, field, fields, Array.isArray(rowErrors) ? { ...details, rowErrors } : details);
   }
   return new ApiError(
     response.status,
@@ -94,7 +98,7 @@ export async function csrfTokenFor(): Promise<string> {
  * the token once, and again once if the server rejects it), and turns `{ error }` bodies into `ApiError`.
  * @param method HTTP method
  * @param path path under `/api`, e.g. `/organizations`
- * @param options JSON body, query parameters, abort signal
+ * @param options JSON body (or FormData for a file upload), query parameters, abort signal
  * @returns the parsed JSON body (202 Accepted included), or `undefined` for 204 or an empty body
  * @example const { workspaces } = await apiRequest<{ workspaces: Workspace[] }>('GET', `/organizations/${id}/workspaces`);
  */
