@@ -1,6 +1,6 @@
 import type { Worker } from 'node:worker_threads';
 import { scoringWorkerFile, type ScoringWorkerInput, type ScoringWorkerMessage } from './scoring-worker.js';
-import { workerStart } from './surface-worker-start.js';
+import { workerAnswer } from './worker-answer.js';
 
 /** The one answer of a scoring worker (anything but progress). */
 export type ScoringWorkerOutcome = Exclude<ScoringWorkerMessage, { type: 'progress' }>;
@@ -16,22 +16,16 @@ export type ScoringWorkerOutcome = Exclude<ScoringWorkerMessage, { type: 'progre
  * const { outcome } = scoringWorkerRun({ mode: 'score', input }, [input.raster.buffer]);
  */
 export function scoringWorkerRun(job: ScoringWorkerInput, transfer: ArrayBuffer[], onProgress?: (f: number) => void): { worker: Worker; outcome: Promise<ScoringWorkerOutcome> } {
-  const worker = workerStart(scoringWorkerFile());
-  const outcome = new Promise<ScoringWorkerOutcome>((resolve, reject) => {
-    let settled = false;
-    const done = (fn: () => void): void => {
-      if (settled) return;
-      settled = true;
-      fn();
-      void worker.terminate();
-    };
-    worker.on('message', (m: ScoringWorkerMessage) => {
-      if (m.type === 'progress') onProgress?.(m.fraction);
-      else done(() => resolve(m));
-    });
-    worker.on('error', (err) => done(() => reject(err)));
-    worker.on('exit', (code) => done(() => reject(new Error(`the scoring worker stopped (exit code ${code})`))));
-    worker.postMessage(job, transfer);
-  });
-  return { worker, outcome };
+  const { worker, answer } = workerAnswer<ScoringWorkerMessage, ScoringWorkerOutcome>(
+    scoringWorkerFile(),
+    job,
+    transfer,
+    (m) => {
+      if (m.type !== 'progress') return { value: m };
+      onProgress?.(m.fraction);
+      return undefined;
+    },
+    'scoring',
+  );
+  return { worker, outcome: answer };
 }

@@ -1,6 +1,7 @@
 import type { CustomerPoints } from '../customer-file/customer-points.js';
 import type { ComputeSurfaceInput, ComputeSurfaceMessage } from '../../jobs/compute-surface.js';
-import { computeSurfaceFile, workerStart } from '../../jobs/surface-worker-start.js';
+import { computeSurfaceFile } from '../../jobs/surface-worker-start.js';
+import { workerAnswer } from '../../jobs/worker-answer.js';
 import { SurfaceInputError } from './surface-errors.js';
 import type { SurfacePlanSummary } from './surface-plan.js';
 import type { SurfaceParams } from './surface.schemas.js';
@@ -16,25 +17,18 @@ import type { SurfaceParams } from './surface.schemas.js';
  * const plan = await surfacePlanOffThread(await customerPointsLoad(em, fileId), params);
  */
 export function surfacePlanOffThread(points: CustomerPoints, params: SurfaceParams): Promise<SurfacePlanSummary> {
-  return new Promise((resolve, reject) => {
-    const worker = workerStart(computeSurfaceFile());
-    let settled = false;
-    const done = (fn: () => void): void => {
-      if (settled) return;
-      settled = true;
-      fn();
-      void worker.terminate();
-    };
-    worker.on('message', (m: ComputeSurfaceMessage) => {
-      if (m.type === 'plan') done(() => resolve(m.plan));
-      else if (m.type === 'error') {
-        const field = m.field === 'spec' || m.field === 'polygon' ? 'studyArea' : m.field;
-        done(() => reject(m.input ? new SurfaceInputError(m.code, m.message, field, m.details) : new Error(m.message)));
-      }
-    });
-    worker.on('error', (err) => done(() => reject(err)));
-    worker.on('exit', (code) => done(() => reject(new Error(`the planning worker stopped (exit code ${code})`))));
-    const input: ComputeSurfaceInput = { mode: 'plan', lon: points.lon, lat: points.lat, w: points.w, params };
-    worker.postMessage(input, [points.lon.buffer, points.lat.buffer, points.w.buffer] as ArrayBuffer[]);
-  });
+  const input: ComputeSurfaceInput = { mode: 'plan', lon: points.lon, lat: points.lat, w: points.w, params };
+  const transfer = [points.lon.buffer, points.lat.buffer, points.w.buffer] as ArrayBuffer[];
+  return workerAnswer<ComputeSurfaceMessage, SurfacePlanSummary>(
+    computeSurfaceFile(),
+    input,
+    transfer,
+    (m) => {
+      if (m.type === 'plan') return { value: m.plan };
+      if (m.type !== 'error') return undefined;
+      const field = m.field === 'spec' || m.field === 'polygon' ? 'studyArea' : m.field;
+      return { error: m.input ? new SurfaceInputError(m.code, m.message, field, m.details) : new Error(m.message) };
+    },
+    'planning',
+  ).answer;
 }
