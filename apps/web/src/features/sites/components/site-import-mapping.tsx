@@ -1,6 +1,10 @@
-import { Badge, Field, Select, TextField } from '@demandscape/ui';
+import { Field, Select, TextField } from '@demandscape/ui';
+import { MappedColumnsTable } from '../../../components/tables/mapped-columns-table';
 import type { SiteColumnMapping, SiteImportPreview, SiteKind } from '../types';
 import { siteExplanations, siteKindOrder, siteKindWords } from '../utils/site-explanations';
+
+/** How a used column is marked above the preview when its field name is not plain enough. */
+const roleWords: Partial<Record<keyof SiteColumnMapping, string>> = { lon: 'longitude', lat: 'latitude', attractivenessLabel: 'unit' };
 
 /** Each mapped field: label, whether a column is required, and its one-line explanation. */
 export const siteMappingFields: Array<{ key: keyof SiteColumnMapping; label: string; required: boolean; hint: string }> = [
@@ -81,41 +85,15 @@ export function SiteImportMapping({ preview, choices, onChange, errors }: SiteIm
           onChange={(e) => onChange({ ...choices, defaultAttractiveness: e.target.value })}
         />
       </div>
-      <div className="overflow-x-auto rounded-control border border-line">
-        <table className="min-w-full text-left text-xs tabular-nums">
-          <caption className="sr-only">First {preview.sampleRows.length} rows of the file</caption>
-          <thead className="bg-sunken">
-            <tr>
-              {preview.columns.map((column) => {
-                const role = roleOf(column);
-                return (
-                  <th key={column} scope="col" className="px-3 py-2 align-bottom font-medium whitespace-nowrap text-ink">
-                    {role ? (
-                      <Badge tone="accent" className="mb-1 block w-fit">
-                        {role.key === 'attractivenessLabel' ? 'unit' : role.key === 'lon' ? 'longitude' : role.key === 'lat' ? 'latitude' : role.key}
-                      </Badge>
-                    ) : (
-                      <span className="mb-1 block text-[0.65rem] font-normal text-ink-faint">not used</span>
-                    )}
-                    {column}
-                  </th>
-                );
-              })}
-            </tr>
-          </thead>
-          <tbody>
-            {preview.sampleRows.map((row, r) => (
-              <tr key={r} className="border-t border-line">
-                {preview.columns.map((column, c) => (
-                  <td key={column} className={roleOf(column) ? 'px-3 py-1.5 text-ink' : 'px-3 py-1.5 text-ink-faint'}>
-                    {row[c] ?? ''}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <MappedColumnsTable
+        columns={preview.columns}
+        rows={preview.sampleRows}
+        roleOf={(column) => {
+          const role = roleOf(column);
+          return role ? (roleWords[role.key] ?? role.key) : null;
+        }}
+        unusedLabel="not used"
+      />
     </div>
   );
 }
