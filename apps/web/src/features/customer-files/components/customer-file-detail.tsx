@@ -1,4 +1,4 @@
-import { Alert, Button, ProgressBar, Spinner } from '@demandscape/ui';
+import { Alert, ProgressBar, Spinner } from '@demandscape/ui';
 import { errorMessage } from '../../../lib/api-error';
 import { useCustomerFile } from '../api/get-customer-file';
 import { useCustomerFilePreview } from '../api/get-customer-file-preview';
@@ -6,6 +6,7 @@ import type { CustomerFile } from '../types';
 import { countText } from '../utils/byte-size';
 import { ColumnMappingForm } from './column-mapping-form';
 import { ValidationReport } from './validation-report';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type CustomerFileDetailProps = {
   orgId: string;
@@ -19,12 +20,7 @@ function MappingStep({ orgId, workspaceId, file }: { orgId: string; workspaceId:
   if (preview.isPending) return <Spinner label="Reading the first rows" className="flex justify-center p-6" />;
   if (preview.isError) {
     return (
-      <Alert tone="danger" title="Could not read the first rows of the file">
-        {errorMessage(preview.error)}{' '}
-        <Button variant="link" onClick={() => void preview.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not read the first rows of the file" error={preview.error} onRetry={preview.refetch} />
     );
   }
   return <ColumnMappingForm orgId={orgId} workspaceId={workspaceId} file={file} preview={preview.data} onImportStarted={() => {}} />;

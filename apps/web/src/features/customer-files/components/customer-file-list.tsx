@@ -1,12 +1,12 @@
-import { Alert, Button, Dialog, Spinner } from '@demandscape/ui';
+import { Button, Dialog, Spinner } from '@demandscape/ui';
 import { useState } from 'react';
-import { errorMessage } from '../../../lib/api-error';
 import { dateText } from '../../../lib/format';
 import { useCustomerFiles } from '../api/get-customer-files';
 import type { CustomerFile } from '../types';
 import { byteSizeText, countText } from '../utils/byte-size';
 import { CustomerFileStatusBadge } from './customer-file-status-badge';
 import { DeleteCustomerFileConfirm } from './delete-customer-file-confirm';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type CustomerFileListProps = {
   orgId: string;
@@ -32,12 +32,7 @@ export function CustomerFileList({ orgId, workspaceId, selectedId, onSelect, can
   if (files.isPending) return <Spinner label="Loading customer files" className="flex justify-center p-6" />;
   if (files.isError) {
     return (
-      <Alert tone="danger" title="Could not load the customer files">
-        {errorMessage(files.error)}{' '}
-        <Button variant="link" onClick={() => void files.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not load the customer files" error={files.error} onRetry={files.refetch} />
     );
   }
   if (files.data.length === 0) {

@@ -1,10 +1,10 @@
-import { Alert, Badge, Button, EmptyState, Spinner } from '@demandscape/ui';
+import { Badge, EmptyState, Spinner } from '@demandscape/ui';
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-error';
 import { dateText } from '../../../lib/format';
 import { useOrgShortlists } from '../api/get-org-shortlists';
 import type { ShortlistSummary } from '../types';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type OrgShortlistListProps = { orgId: string };
 
@@ -20,12 +20,7 @@ export function OrgShortlistList({ orgId }: OrgShortlistListProps) {
   if (shortlists.isPending) return <Spinner label="Loading shortlists" className="flex justify-center p-16" />;
   if (shortlists.isError) {
     return (
-      <Alert tone="danger" title="Could not load the shortlists">
-        {errorMessage(shortlists.error)}{' '}
-        <Button variant="link" onClick={() => void shortlists.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not load the shortlists" error={shortlists.error} onRetry={shortlists.refetch} />
     );
   }
   if (shortlists.data.length === 0) {

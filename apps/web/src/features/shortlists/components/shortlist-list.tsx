@@ -1,9 +1,9 @@
-import { Alert, Badge, Button, Spinner } from '@demandscape/ui';
+import { Badge, Button, Spinner } from '@demandscape/ui';
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-error';
 import { dateText } from '../../../lib/format';
 import { useShortlists } from '../api/get-shortlists';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type ShortlistListProps = {
   orgId: string;
@@ -24,12 +24,7 @@ export function ShortlistList({ orgId, workspaceId, canWrite, onOpen }: Shortlis
   if (shortlists.isPending) return <Spinner label="Loading shortlists" className="flex justify-center p-6" />;
   if (shortlists.isError) {
     return (
-      <Alert tone="danger" title="Could not load the shortlists">
-        {errorMessage(shortlists.error)}{' '}
-        <Button variant="link" onClick={() => void shortlists.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not load the shortlists" error={shortlists.error} onRetry={shortlists.refetch} />
     );
   }
   if (shortlists.data.length === 0) {

@@ -1,8 +1,8 @@
-import { Alert, Button, Spinner } from '@demandscape/ui';
-import { errorMessage } from '../../../lib/api-error';
+import { Spinner } from '@demandscape/ui';
 import { useSurfaces } from '../api/get-surfaces';
 import type { Surface } from '../types';
 import { SurfaceRunCard } from './surface-run-card';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type SurfaceListProps = {
   orgId: string;
@@ -23,12 +23,7 @@ export function SurfaceList({ orgId, workspaceId, canWrite, selectedId, onSelect
   if (surfaces.isPending) return <Spinner label="Loading demand surfaces" className="flex justify-center p-6" />;
   if (surfaces.isError) {
     return (
-      <Alert tone="danger" title="Could not load the demand surfaces">
-        {errorMessage(surfaces.error)}{' '}
-        <Button variant="link" onClick={() => void surfaces.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not load the demand surfaces" error={surfaces.error} onRetry={surfaces.refetch} />
     );
   }
   if (surfaces.data.length === 0) {

@@ -1,9 +1,9 @@
-import { Alert, Button, EmptyState, LogoMark, Spinner } from '@demandscape/ui';
+import { Button, EmptyState, LogoMark, Spinner } from '@demandscape/ui';
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-error';
 import { dateText } from '../../../lib/format';
 import { useWorkspaces } from '../api/get-workspaces';
+import { LoadErrorAlert } from '../../../components/errors/load-error-alert';
 
 export type WorkspaceListProps = {
   orgId: string;
@@ -23,12 +23,7 @@ export function WorkspaceList({ orgId, onCreate }: WorkspaceListProps) {
   if (workspaces.isPending) return <Spinner label="Loading workspaces" className="flex justify-center p-16" />;
   if (workspaces.isError) {
     return (
-      <Alert tone="danger" title="Could not load the workspaces">
-        {errorMessage(workspaces.error)}{' '}
-        <Button variant="link" onClick={() => void workspaces.refetch()}>
-          Try again
-        </Button>
-      </Alert>
+      <LoadErrorAlert title="Could not load the workspaces" error={workspaces.error} onRetry={workspaces.refetch} />
     );
   }
   if (workspaces.data.length === 0) {
