@@ -1,27 +1,16 @@
 import { AppError } from '../common/errors.js';
 import type {
-  CandidateScoreJson,
   ScoringRunJson,
   ScoringSettingsJson,
 } from '../scoring/scoring.types.js';
 import { SHORTLIST_CAUTION } from '../shortlist/shortlist-caution.js';
-import type { ShortlistJson } from '../shortlist/shortlist.types.js';
+import type { ShortlistItemJson, ShortlistJson } from '../shortlist/shortlist.types.js';
 
-/** One candidate as a report lists it (a ranking row or a shortlist item). */
-export interface ReportSite {
-  /** Position the planner chose (shortlists); null in a ranking. */
-  position: number | null;
-  siteId: string;
-  name: string;
-  lon: number;
-  lat: number;
-  attractiveness: number;
-  attractivenessLabel: string;
-  /** The planner's note (shortlists) or the site's notes (rankings). */
-  note: string;
-  score: Omit<CandidateScoreJson, 'siteId' | 'name'>;
-  stability: { minRank: number; maxRank: number; unstable: boolean } | null;
-}
+/**
+ * One candidate as a report lists it (a ranking row or a shortlist item): a shortlist item whose
+ * `order` is `position` — null in a ranking — and whose `note` is the site's notes in a ranking.
+ */
+export type ReportSite = Omit<ShortlistItemJson, 'order'> & { position: number | null };
 
 /** Everything a report file shows: run parameters, the caution and the sites in report order. */
 export interface ReportModel {
